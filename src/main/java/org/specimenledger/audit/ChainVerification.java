@@ -1,0 +1,20 @@
+package org.specimenledger.audit;
+
+/**
+ * The outcome of recomputing the chain: valid with the number of events checked, or the first event
+ * that does not verify and why.
+ *
+ * @param firstBrokenSeq null when valid
+ * @param problem        {@code hash-mismatch}, {@code broken-link} or {@code missing-sequence}; null when valid
+ */
+public record ChainVerification(boolean valid, long eventsChecked, String headHash, Long firstBrokenSeq,
+        String problem, String detail) {
+
+    static ChainVerification ok(long checked, String headHash) {
+        return new ChainVerification(true, checked, headHash, null, null, null);
+    }
+
+    static ChainVerification broken(long checked, long seq, String problem, String detail) {
+        return new ChainVerification(false, checked, null, seq, problem, detail);
+    }
+}

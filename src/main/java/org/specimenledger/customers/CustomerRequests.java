@@ -1,0 +1,40 @@
+package org.specimenledger.customers;
+
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.PositiveOrZero;
+import jakarta.validation.constraints.Size;
+import java.math.BigDecimal;
+import java.time.LocalDate;
+import java.util.List;
+
+/** Request bodies of the customers feature. A {@code reason} is required when changing a record. */
+final class CustomerRequests {
+
+    private CustomerRequests() {
+    }
+
+    record CustomerRequest(
+            @NotBlank @Size(max = 200) String name,
+            @NotBlank @Size(max = 1000) String address,
+            @Size(max = 2000) String reason) {
+    }
+
+    record RequirementRequest(
+            @NotBlank @Size(max = 20) String property,
+            BigDecimal min,
+            BigDecimal max,
+            @NotBlank @Size(max = 10) String unit,
+            @PositiveOrZero BigDecimal thicknessMinMm,
+            @PositiveOrZero BigDecimal thicknessMaxMm) {
+    }
+
+    record OrderRequest(
+            @NotBlank @Size(max = 100) String purchaseOrder,
+            @NotBlank @Size(max = 300) String materialSpecification,
+            LocalDate receivedOn,
+            @NotNull @Size(max = 100) List<@NotNull @Valid RequirementRequest> requirements,
+            @Size(max = 2000) String reason) {
+    }
+}

@@ -1,0 +1,15 @@
+package org.specimenledger.system;
+
+import java.time.Clock;
+import org.springframework.context.annotation.Bean;
+import org.springframework.context.annotation.Configuration;
+
+/** One clock for the whole service, in UTC, so that tests can fix time where they need to. */
+@Configuration(proxyBeanMethods = false)
+class ClockConfiguration {
+
+    @Bean
+    Clock clock() {
+        return Clock.systemUTC();
+    }
+}

@@ -1,0 +1,102 @@
+package org.specimenledger.testsupport;
+
+import java.io.IOException;
+import java.net.URI;
+import java.net.http.HttpClient;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
+import java.time.Duration;
+import java.util.Base64;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/** A small real-HTTP client for tests: JSON in, status and JSON out, signed in as one user (or nobody). */
+public final class Api {
+
+    private static final HttpClient HTTP = HttpClient.newBuilder().connectTimeout(Duration.ofSeconds(10)).build();
+    public static final JsonMapper JSON = JsonMapper.builder().build();
+
+    private final int port;
+    private final String authorization;
+
+    Api(int port, String username, String password) {
+        this.port = port;
+        this.authorization = username == null ? null : "Basic " + Base64.getEncoder()
+                .encodeToString((username + ":" + password).getBytes(StandardCharsets.UTF_8));
+    }
+
+    public Response get(String path) {
+        return send(request(path).GET());
+    }
+
+    public Response post(String path, Object body) {
+        return send(request(path).header("Content-Type", "application/json")
+                .POST(HttpRequest.BodyPublishers.ofString(text(body))));
+    }
+
+    public Response put(String path, Object body) {
+        return send(request(path).header("Content-Type", "application/json")
+                .PUT(HttpRequest.BodyPublishers.ofString(text(body))));
+    }
+
+    public Response delete(String path) {
+        return send(request(path).DELETE());
+    }
+
+    /** Sends raw text as the JSON body, for malformed-input tests. */
+    public Response postRaw(String path, String body) {
+        return send(request(path).header("Content-Type", "application/json")
+                .POST(HttpRequest.BodyPublishers.ofString(body)));
+    }
+
+    private HttpRequest.Builder request(String path) {
+        HttpRequest.Builder b = HttpRequest.newBuilder(URI.create("http://127.0.0.1:" + port + path))
+                .timeout(Duration.ofSeconds(60));
+        if (authorization != null) {
+            b.header("Authorization", authorization);
+        }
+        return b;
+    }
+
+    private static String text(Object body) {
+        return body instanceof String s ? s : JSON.writeValueAsString(body);
+    }
+
+    private static Response send(HttpRequest.Builder builder) {
+        try {
+            HttpResponse<String> r = HTTP.send(builder.build(), HttpResponse.BodyHandlers.ofString());
+            return new Response(r.statusCode(), r.body(), r.headers().firstValue("Content-Type").orElse(""));
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** A response: status, raw body and the body as JSON (null when empty or not JSON). */
+    public record Response(int status, String body, String contentType) {
+
+        public JsonNode json() {
+            if (body == null || body.isBlank()) {
+                return null;
+            }
+            return JSON.readTree(body);
+        }
+
+        public String text(String field) {
+            JsonNode n = json().get(field);
+            return n == null || n.isNull() ? null : n.asString();
+        }
+
+        public String id() {
+            return text("id");
+        }
+
+        @Override
+        public String toString() {
+            return status + " " + body;
+        }
+    }
+}
