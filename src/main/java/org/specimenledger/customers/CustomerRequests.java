@@ -10,18 +10,18 @@ import java.time.LocalDate;
 import java.util.List;
 
 /** Request bodies of the customers feature. A {@code reason} is required when changing a record. */
-final class CustomerRequests {
+public final class CustomerRequests {
 
     private CustomerRequests() {
     }
 
-    record CustomerRequest(
+    public record CustomerRequest(
             @NotBlank @Size(max = 200) String name,
             @NotBlank @Size(max = 1000) String address,
             @Size(max = 2000) String reason) {
     }
 
-    record RequirementRequest(
+    public record RequirementRequest(
             @NotBlank @Size(max = 20) String property,
             BigDecimal min,
             BigDecimal max,
@@ -30,7 +30,7 @@ final class CustomerRequests {
             @PositiveOrZero BigDecimal thicknessMaxMm) {
     }
 
-    record OrderRequest(
+    public record OrderRequest(
             @NotBlank @Size(max = 100) String purchaseOrder,
             @NotBlank @Size(max = 300) String materialSpecification,
             LocalDate receivedOn,

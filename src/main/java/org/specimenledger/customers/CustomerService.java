@@ -13,7 +13,7 @@ import org.springframework.transaction.annotation.Transactional;
 
 /** Registers and changes customers and orders; each write is one ledger event in the same transaction. */
 @Service
-class CustomerService {
+public class CustomerService {
 
     private final CustomerRepository customers;
     private final CustomerOrderRepository orders;
@@ -28,7 +28,7 @@ class CustomerService {
     }
 
     @Transactional
-    CustomerView register(CustomerRequests.CustomerRequest request) {
+    public CustomerView register(CustomerRequests.CustomerRequest request) {
         String name = request.name().trim();
         if (customers.existsByNameIgnoreCase(name)) {
             throw new DuplicateRecord("/name", "a customer named '" + name + "' already exists");
@@ -68,7 +68,7 @@ class CustomerService {
     }
 
     @Transactional
-    OrderView placeOrder(UUID customerId, CustomerRequests.OrderRequest request) {
+    public OrderView placeOrder(UUID customerId, CustomerRequests.OrderRequest request) {
         Customer customer = customers.findById(customerId)
                 .orElseThrow(() -> new RecordNotFound("customer", customerId));
         List<Requirement> requirements = RequirementRules.checked(request.requirements());
