@@ -1,7 +1,6 @@
 package org.specimenledger.equipment;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.specimenledger.equipment.EquipmentFixtures.extensometerCalibration;
 import static org.specimenledger.equipment.EquipmentFixtures.loadCellCalibration;
 import static org.specimenledger.equipment.EquipmentFixtures.loadCellRanges;
