@@ -3,6 +3,8 @@ package org.specimenledger.heats;
 import jakarta.persistence.criteria.Predicate;
 import java.math.BigDecimal;
 import java.time.Clock;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -49,7 +51,7 @@ public class HeatService {
             throw duplicate(producer, number);
         }
         Heat heat = heats.saveAndFlush(new Heat(number, producer, request.grade().trim(), request.productForm(),
-                request.nominalThicknessMm(), composition, clock.instant()));
+                request.nominalThicknessMm(), composition, now()));
         HeatView view = HeatView.of(heat);
         ledger.record("heat.registered", "heat", heat.id(), request.reason(), null, view);
         return view;
@@ -109,5 +111,10 @@ public class HeatService {
     private static DuplicateRecord duplicate(String producer, String number) {
         return new DuplicateRecord("/heatNumber", "producer '" + producer + "' already has a heat numbered '"
                 + number + "'");
+    }
+
+    /** PostgreSQL keeps microseconds: truncate so that the view the ledger records equals the stored row. */
+    private Instant now() {
+        return clock.instant().truncatedTo(ChronoUnit.MICROS);
     }
 }

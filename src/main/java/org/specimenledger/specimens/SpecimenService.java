@@ -2,6 +2,8 @@ package org.specimenledger.specimens;
 
 import jakarta.persistence.criteria.Predicate;
 import java.time.Clock;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -58,7 +60,7 @@ public class SpecimenService {
             throw duplicate(mark);
         }
         Specimen specimen = specimens.saveAndFlush(new Specimen(mark, request.heatId(), request.orderId(), customerId,
-                request.orientation(), trimmed(request.samplingPosition()), geometry, clock.instant()));
+                request.orientation(), trimmed(request.samplingPosition()), geometry, now()));
         SpecimenView view = SpecimenView.of(specimen);
         ledger.record("specimen.registered", "specimen", specimen.id(), request.reason(), null, view);
         return view;
@@ -101,7 +103,7 @@ public class SpecimenService {
         FractureMeasurement measurement = SpecimenRules.afterFracture(specimen.shape(), specimen.s0Mm2(),
                 specimen.l0Mm(), request);
         SpecimenView before = SpecimenView.of(specimen);
-        specimen.recordAfterFracture(measurement, clock.instant());
+        specimen.recordAfterFracture(measurement, now());
         specimens.saveAndFlush(specimen);
         SpecimenView after = SpecimenView.of(specimen);
         ledger.record(replacing ? "specimen.after-fracture-changed" : "specimen.after-fracture-recorded", "specimen",
@@ -161,5 +163,10 @@ public class SpecimenService {
 
     private static String trimmed(String text) {
         return text == null || text.isBlank() ? null : text.trim();
+    }
+
+    /** PostgreSQL keeps microseconds: truncate so that the view the ledger records equals the stored row. */
+    private Instant now() {
+        return clock.instant().truncatedTo(ChronoUnit.MICROS);
     }
 }

@@ -132,6 +132,7 @@ class HeatsApiTest extends IntegrationTest {
         assertThat(events.get(0).get("action").asString()).isEqualTo("heat.registered");
         assertThat(events.get(0).get("before").isNull()).isTrue();
         assertThat(events.get(0).get("after").get("grade").asString()).isEqualTo("S355J2+N");
+        assertThat(events.get(1).get("after")).isEqualTo(manager().get("/api/v1/heats/" + id).json());
         assertThat(events.get(0).get("actor").asString()).isEqualTo(TestAccounts.TECHNICIAN);
         assertThat(events.get(1).get("action").asString()).isEqualTo("heat.changed");
         assertThat(events.get(1).get("reason").asString()).isEqualTo("mill certificate reissued");
