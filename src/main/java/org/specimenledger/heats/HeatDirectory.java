@@ -1,0 +1,27 @@
+package org.specimenledger.heats;
+
+import java.util.Optional;
+import java.util.UUID;
+import org.springframework.stereotype.Component;
+import org.springframework.transaction.annotation.Transactional;
+
+/** What other features may ask of heats, by identifier, without the visibility rules of the API. */
+@Component
+public class HeatDirectory {
+
+    private final HeatRepository heats;
+
+    HeatDirectory(HeatRepository heats) {
+        this.heats = heats;
+    }
+
+    @Transactional(readOnly = true)
+    public boolean exists(UUID id) {
+        return id != null && heats.existsById(id);
+    }
+
+    @Transactional(readOnly = true)
+    public Optional<HeatView> find(UUID id) {
+        return id == null ? Optional.empty() : heats.findById(id).map(HeatView::of);
+    }
+}

@@ -1,0 +1,25 @@
+package org.specimenledger.specimens;
+
+import java.util.Optional;
+import java.util.UUID;
+import org.springframework.stereotype.Component;
+import org.springframework.transaction.annotation.Transactional;
+
+/**
+ * What other features (testing, certificates, trace) may ask of specimens, by identifier, without the
+ * visibility rules of the API: S0, L0, Le, Lc, Lu, Su, the heat, the order and its customer organisation.
+ */
+@Component
+public class SpecimenDirectory {
+
+    private final SpecimenRepository specimens;
+
+    SpecimenDirectory(SpecimenRepository specimens) {
+        this.specimens = specimens;
+    }
+
+    @Transactional(readOnly = true)
+    public Optional<SpecimenView> find(UUID id) {
+        return id == null ? Optional.empty() : specimens.findById(id).map(SpecimenView::of);
+    }
+}
