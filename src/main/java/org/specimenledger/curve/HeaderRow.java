@@ -117,7 +117,7 @@ final class HeaderRow {
 
     private static char detectDelimiter(String text, int line) {
         List<String> present = new ArrayList<>();
-        char chosen = ',';
+        char chosen = 0;
         for (char candidate : new char[] {'\t', ';', ','}) {
             if (text.indexOf(candidate) >= 0) {
                 present.add(candidate == '\t' ? "tab" : "\"" + candidate + "\"");
@@ -128,7 +128,10 @@ final class HeaderRow {
             throw new CurveRejected(line, 0, "the header row mixes delimiters (" + String.join(" and ", present)
                     + "); use only one of comma, semicolon or tab");
         }
-        // No delimiter at all: a single-column header, which then lacks a required channel.
+        if (present.isEmpty()) {
+            throw new CurveRejected(line, 0, "the header row \"" + text.strip() + "\" has no comma, semicolon or tab;"
+                    + " a curve needs at least a force and an extension column");
+        }
         return chosen;
     }
 
