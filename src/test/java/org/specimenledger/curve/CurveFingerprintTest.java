@@ -48,7 +48,7 @@ class CurveFingerprintTest {
     }
 
     @Test
-    void fingerprintMatchesAPublishedTestVectorShape() throws Exception {
+    void jdkOracleMatchesTheFips180TestVectorForAbc() throws Exception {
         // FIPS 180-2 appendix B.1 test vector: SHA-256("abc"). Not a curve, so we check the oracle itself
         // against the standard before trusting it above.
         assertThat(jdkSha256(utf8("abc")))
