@@ -111,7 +111,7 @@ public final class CurveReader {
             int to = lines.end();
             int line = lines.lineNumber();
             if (rows != null && from < to && b[from] != '#' && b[from] != ' ' && b[from] != '\t') {
-                rows.accept(b, from, to, line); // the common case, first
+                rows.accept(b, from, to, line, lines.lineIsAscii()); // the common case, first
             } else if (isBlank(b, from, to)) {
                 if (rows != null) {
                     firstBlankDataLine = blankDataLines++ == 0 ? line : firstBlankDataLine;
@@ -121,7 +121,7 @@ public final class CurveReader {
                     throw new CurveRejected(line, 0, "a \"#\" line after the header row; metadata and comments"
                             + " belong before the header");
                 }
-                rows.accept(b, from, to, line);
+                rows.accept(b, from, to, line, lines.lineIsAscii());
             } else if (Preamble.isPreambleLine(b, from, to)) {
                 preamble.accept(b, from, to, line);
                 preambleLines++;

@@ -1,22 +1,27 @@
 package org.specimenledger.curve;
 
 import ch.randelshofer.fastdoubleparser.JavaDoubleParser;
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
+import java.nio.ByteOrder;
 import java.nio.charset.StandardCharsets;
 import java.util.Locale;
 
 /**
  * Parses data rows straight from the byte buffer into one primitive list per channel.
  *
- * <p>This is the hot loop: one pass per row finds the delimiters, and a numeric cell goes to
+ * <p>This is the hot loop: delimiters are found eight bytes at a time, and a numeric cell goes to
  * {@link JavaDoubleParser} as a byte slice without any copy, String or object per point. Only a cell
  * that fails takes the slow path, which works out the precise reason (NaN spellings, misplaced
- * decimal comma, invalid UTF-8). Non-ASCII bytes cannot be part of a number, so UTF-8 needs checking
- * only when a row holds one; the loop ORs the bytes together to find out for free.
+ * decimal comma). Non-ASCII bytes cannot be part of a number, so UTF-8 needs checking only for a
+ * row that holds one, which the line splitter notices for free.
  */
 final class DataRows {
 
     /** Longer cells are refused before parsing: no instrument writes 100 characters for one number. */
     static final int MAX_NUMBER_LENGTH = 100;
+
+    private static final VarHandle LONGS = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
 
 
     private final HeaderRow header;
@@ -29,6 +34,8 @@ final class DataRows {
     private final UnitFactor[] factors;
     private final String[] labels;
     private final int timeSlot;
+    /** The delimiter repeated in all eight bytes of a long, for the word-at-a-time search. */
+    private final long delimiterWord;
     private final byte[] scratch = new byte[MAX_NUMBER_LENGTH];
     private int rows;
     private int repeatedTimes;
@@ -62,40 +69,63 @@ final class DataRows {
             slot++;
         }
         this.timeSlot = time;
+        this.delimiterWord = (delimiter & 0xFFL) * 0x0101010101010101L;
     }
 
-    /** Parses one non-blank data row {@code b[from, to)} found on physical line {@code line}. */
-    void accept(byte[] b, int from, int to, int line) {
-        final byte delim = delimiter;
-        int cell = 0;
+    /**
+     * Parses one non-blank data row {@code b[from, to)} found on physical line {@code line}.
+     *
+     * @param ascii whether the row holds only ASCII bytes (then it cannot be malformed UTF-8)
+     */
+    void accept(byte[] b, int from, int to, int line, boolean ascii) {
+        if (!ascii) {
+            // Rare: a byte of 0x80 or more (a unit sign in an ignored column, or junk). Name invalid
+            // UTF-8 before anything else; valid non-ASCII text then fails as a number if it matters.
+            Utf8Text.check(b, from, to, line, delimiter);
+        }
+        final long delimiters = delimiterWord;
         int cellStart = from;
-        int orOfBytes = 0;
-        for (int i = from; ; i++) {
-            if (i == to || b[i] == delim) {
-                if (cell == cellCount) {
+        for (int cell = 0; ; cell++) {
+            int cellEnd = indexOfDelimiter(b, cellStart, to, delimiters);
+            if (cell == cellCount) {
+                throw raggedRow(b, from, to, line);
+            }
+            int slot = slotOfColumn[cell];
+            if (slot >= 0) {
+                store(slot, b, cellStart, cellEnd, line, cell + 1);
+            }
+            if (cellEnd == to) {
+                if (cell + 1 != cellCount) {
                     throw raggedRow(b, from, to, line);
                 }
-                int slot = slotOfColumn[cell];
-                if (slot >= 0) {
-                    store(slot, b, cellStart, i, line, cell + 1, from, to);
-                }
-                cell++;
-                if (i == to) {
-                    break;
-                }
-                cellStart = i + 1;
-            } else {
-                orOfBytes |= b[i];
+                break;
             }
-        }
-        if (cell != cellCount) {
-            throw raggedRow(b, from, to, line);
-        }
-        if (orOfBytes < 0) {
-            // A byte >= 0x80 somewhere, so far only in ignored columns: the file must still be UTF-8.
-            Utf8Text.check(b, from, to, line, delim);
+            cellStart = cellEnd + 1;
         }
         rows++;
+    }
+
+    /**
+     * Position of the next delimiter in {@code b[from, to)}, or {@code to}; eight bytes at a time with
+     * the same zero-byte test as the line splitter. Reading a word may look past {@code to} (into the
+     * line end or the next line) but never past the array, and a hit beyond {@code to} is ignored.
+     */
+    private static int indexOfDelimiter(byte[] b, int from, int to, long delimiters) {
+        int i = from;
+        for (int last = Math.min(to, b.length - Long.BYTES); i < last; i += Long.BYTES) {
+            long x = (long) LONGS.get(b, i) ^ delimiters;
+            long found = (x - 0x0101010101010101L) & ~x & 0x8080808080808080L;
+            if (found != 0) {
+                return Math.min(to, i + (Long.numberOfTrailingZeros(found) >>> 3));
+            }
+        }
+        byte delimiter = (byte) delimiters;
+        for (; i < to; i++) {
+            if (b[i] == delimiter) {
+                return i;
+            }
+        }
+        return to;
     }
 
     int rows() {
@@ -120,8 +150,7 @@ final class DataRows {
         return null;
     }
 
-    private void store(int slot, byte[] b, int cellStart, int cellEnd, int line, int column, int rowFrom,
-            int rowTo) {
+    private void store(int slot, byte[] b, int cellStart, int cellEnd, int line, int column) {
         int s = cellStart;
         int e = cellEnd;
         while (s < e && (b[s] == ' ' || b[s] == '\t')) {
@@ -131,16 +160,18 @@ final class DataRows {
             e--;
         }
         double parsed = decimalCommaAllowed && contains(b, s, e, (byte) ',')
-                ? parseWithDecimalComma(slot, b, s, e, line, column, rowFrom, rowTo)
-                : parse(slot, b, s, e, b, s, line, column, rowFrom, rowTo);
+                ? parseWithDecimalComma(slot, b, s, e, line, column)
+                : parse(slot, b, s, e, b, s, line, column);
         double value = factors[slot].toCanonical(parsed);
-        if (!Double.isFinite(parsed) || !Double.isFinite(value)) {
-            throw new CurveRejected(line, column, "the " + labels[slot] + " value \"" + shown(b, s, e)
-                    + "\" is out of the range of a double");
+        if (!Double.isFinite(value)) {
+            throw outOfRange(slot, b, s, e, line, column);
         }
         GrowableDoubles list = lists[slot];
         if (slot == timeSlot && list.size() > 0) {
-            checkTimeOrder(list.last(), value, b, s, e, line, column);
+            double previous = list.last();
+            if (value <= previous) {
+                timeNotIncreasing(previous, value, b, s, e, line, column);
+            }
         }
         list.add(value);
     }
@@ -153,8 +184,7 @@ final class DataRows {
      * control characters), and a hexadecimal {@code 0x} prefix is refused. What is left of the Java
      * grammar is exactly decimal notation, so the checks cost two or three byte reads, not a pass.
      */
-    private double parse(int slot, byte[] number, int s, int e, byte[] original, int os, int line, int column,
-            int rowFrom, int rowTo) {
+    private double parse(int slot, byte[] number, int s, int e, byte[] original, int os, int line, int column) {
         int length = e - s;
         if (length > 0 && length <= MAX_NUMBER_LENGTH && isFirstOfNumber(number[s])
                 && isLastOfNumber(number[e - 1]) && !isHex(number, s, e)) {
@@ -164,36 +194,38 @@ final class DataRows {
                 // NumberFormatException: "1.2.3", "-", "1e", "1 2" and the like; reported below.
             }
         }
-        throw rejectCell(slot, original, os, os + length, line, column, rowFrom, rowTo);
+        throw rejectCell(slot, original, os, os + length, line, column);
     }
 
-    private double parseWithDecimalComma(int slot, byte[] b, int s, int e, int line, int column, int rowFrom,
-            int rowTo) {
+    private double parseWithDecimalComma(int slot, byte[] b, int s, int e, int line, int column) {
         if (e - s > MAX_NUMBER_LENGTH) {
-            throw rejectCell(slot, b, s, e, line, column, rowFrom, rowTo);
+            throw rejectCell(slot, b, s, e, line, column);
         }
         for (int i = s; i < e; i++) {
             scratch[i - s] = b[i] == ',' ? (byte) '.' : b[i];
         }
-        return parse(slot, scratch, 0, e - s, b, s, line, column, rowFrom, rowTo);
+        return parse(slot, scratch, 0, e - s, b, s, line, column);
     }
 
-    private void checkTimeOrder(double previous, double value, byte[] b, int s, int e, int line, int column) {
+    /** Equal time stamps are counted for a warning; a smaller one rejects the file. */
+    private void timeNotIncreasing(double previous, double value, byte[] b, int s, int e, int line, int column) {
         if (value < previous) {
             throw new CurveRejected(line, column, "time goes backwards: \"" + shown(b, s, e) + "\" is "
                     + value + " s, after " + previous + " s on the previous row");
         }
-        if (value == previous) {
-            if (repeatedTimes == 0) {
-                firstRepeatedTimeLine = line;
-            }
-            repeatedTimes++;
+        if (repeatedTimes == 0) {
+            firstRepeatedTimeLine = line;
         }
+        repeatedTimes++;
+    }
+
+    private CurveRejected outOfRange(int slot, byte[] b, int s, int e, int line, int column) {
+        return new CurveRejected(line, column, "the " + labels[slot] + " value \"" + shown(b, s, e)
+                + "\" is out of the range of a double");
     }
 
     /** The slow path for a cell that is not a plain decimal number: say precisely what it is. */
-    private CurveRejected rejectCell(int slot, byte[] b, int s, int e, int line, int column, int rowFrom, int rowTo) {
-        Utf8Text.check(b, rowFrom, rowTo, line, delimiter); // invalid UTF-8 is named before anything else
+    private CurveRejected rejectCell(int slot, byte[] b, int s, int e, int line, int column) {
         String label = labels[slot];
         if (s == e) {
             return new CurveRejected(line, column, "the " + label + " cell is empty");
@@ -217,7 +249,6 @@ final class DataRows {
     }
 
     private CurveRejected raggedRow(byte[] b, int from, int to, int line) {
-        Utf8Text.check(b, from, to, line, delimiter);
         int cells = 1;
         for (int i = from; i < to; i++) {
             if (b[i] == delimiter) {

@@ -34,6 +34,9 @@ final class LineSource {
     private int lineNumber;
     private int start;
     private int end;
+    /** OR of every byte of the current line: negative when the line holds a byte of 0x80 or more. */
+    private long orOfLine;
+    private long orPending;
 
     LineSource(InputStream in, long maxBytes) {
         this.in = in;
@@ -88,6 +91,14 @@ final class LineSource {
         return lineNumber;
     }
 
+    /**
+     * Whether the current line is pure ASCII, learned for free while looking for its end; only lines
+     * with other bytes need UTF-8 validation (numbers, delimiters and line ends are all ASCII).
+     */
+    boolean lineIsAscii() {
+        return (orOfLine & 0x8080808080808080L) == 0;
+    }
+
     long byteCount() {
         return byteCount;
     }
@@ -107,6 +118,8 @@ final class LineSource {
 
     private void setLine(int from, int to) {
         lineNumber++;
+        orOfLine = orPending;
+        orPending = 0;
         start = from;
         end = to > from && buffer[to - 1] == '\r' ? to - 1 : to;
     }
@@ -119,18 +132,26 @@ final class LineSource {
     private int indexOfNewline(int from) {
         byte[] b = buffer;
         int i = from;
+        long or = orPending;
         for (int last = filled - Long.BYTES; i <= last; i += Long.BYTES) {
-            long x = (long) LONGS.get(b, i) ^ EIGHT_NEWLINES;
+            long word = (long) LONGS.get(b, i);
+            long x = word ^ EIGHT_NEWLINES;
             long found = (x - 0x0101010101010101L) & ~x & 0x8080808080808080L;
             if (found != 0) {
+                // Only the bytes before the LF belong to this line: keep the bits below its flag.
+                orPending = or | (word & (found ^ (found - 1)));
                 return i + (Long.numberOfTrailingZeros(found) >>> 3);
             }
+            or |= word;
         }
         for (; i < filled; i++) {
             if (b[i] == '\n') {
+                orPending = or;
                 return i;
             }
+            or |= b[i] & 0xFF;
         }
+        orPending = or;
         return -1;
     }
 

@@ -24,7 +24,8 @@ import org.specimenledger.curve.RawCurve;
  * {@link JavaDoubleParser#parseDouble(byte[], int, int)}, the lower bound for any reader built on it.
  *
  * <p>Run: {@code mvn -o -Pbench test-compile exec:exec -Dbench.args="CurveReadingBenchmark -f 1 -wi 3 -i 5"}.
- * Throughput in MB/s is {@code bytes / score}; the file size is printed at setup.
+ * Throughput in MB/s is {@code bytes / score}; the file size and the retained heap of one read curve
+ * ({@link CurveReadingHeap}) are printed at setup.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -45,6 +46,7 @@ public class CurveReadingBenchmark {
         file = CurveReadingSample.threeChannelCsv(points);
         System.out.println();
         System.out.println("curve file: " + points + " points, " + file.length + " bytes");
+        CurveReadingHeap.report(reader, file, points);
     }
 
     /** The reader under test: streaming from memory, digest, validation, unit handling, arrays. */
@@ -74,5 +76,18 @@ public class CurveReadingBenchmark {
             }
         }
         return sum;
+    }
+
+    /**
+     * Context for the figures: SHA-256 of the same bytes in 64 KiB updates, work every reader must do
+     * on top of parsing (the fingerprint is part of the contract).
+     */
+    @Benchmark
+    public byte[] digestOnly() throws java.security.NoSuchAlgorithmException {
+        java.security.MessageDigest digest = java.security.MessageDigest.getInstance("SHA-256");
+        for (int at = 0; at < file.length; at += 65536) {
+            digest.update(file, at, Math.min(65536, file.length - at));
+        }
+        return digest.digest();
     }
 }

@@ -13,18 +13,21 @@ final class CurveReadingSample {
     private CurveReadingSample() {
     }
 
-    /** Time in s, force in N, extension in mm; {@code points} data rows after one header row. */
+    /**
+     * Time in s (4 decimals), force in N (4 decimals), extension in mm (6 decimals); {@code points}
+     * data rows after one header row, about 30 bytes per row.
+     */
     static byte[] threeChannelCsv(int points) {
         ByteArrayOutputStream out = new ByteArrayOutputStream(points * 32);
         StringBuilder row = new StringBuilder(64);
         write(out, "time [s],force [N],extension [mm]\n");
         for (int i = 0; i < points; i++) {
-            double time = i * 0.01;
+            double time = i * 0.001;
             double extension = i * 0.00002;
             // Invented smooth shape: elastic rise, then saturating hardening; not any real material.
             double force = 45000.0 * (1.0 - Math.exp(-extension / 0.6)) + 0.123456 * (i % 97);
             row.setLength(0);
-            row.append(round(time, 2)).append(',').append(round(force, 3)).append(',').append(round(extension, 5))
+            row.append(round(time, 4)).append(',').append(round(force, 4)).append(',').append(round(extension, 6))
                     .append('\n');
             write(out, row.toString());
         }
