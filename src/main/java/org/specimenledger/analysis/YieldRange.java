@@ -6,8 +6,10 @@ import java.util.List;
 /**
  * ReL and the end of yielding (for Ae) on a discontinuous curve.
  *
- * <p>Local minima and maxima between the drop after ReH and Fm are found with a hysteresis of
- * {@code turningPointHysteresisPercent} % of FeH [CP], so noise does not create extrema.
+ * <p>Local minima and maxima after the drop that follows ReH are found with a hysteresis of
+ * {@code turningPointHysteresisPercent} % of FeH [CP], so noise does not create extrema. The scan ends
+ * at Fm or as soon as the force rises 4× the yield-drop threshold above the highest plateau peak
+ * found so far (work hardening has begun) [CP].
  *
  * <p>ReL [S: ISO 6892 definition; M: digitised rule]: the lowest force during yielding ignoring the
  * initial transient, i.e. the lowest of the local minima after the first one; the first minimum
@@ -32,9 +34,16 @@ record YieldRange(int lowIndex, int transientIndex, int minima, int lastValleyIn
     static YieldRange of(CurveArrays c, UpperYieldPoint reh, int fmIndex, TensileParameters p) {
         double[] f = c.force;
         double h = p.turningPointHysteresisPercent() / 100 * f[reh.index()];
+        // The extremum scan stops once the force has clearly left the yield range: 4× the yield-drop
+        // band above the highest plateau peak recorded so far (the tangent band below reaches 3× above
+        // the valley). Without this stop, noise on the flat part near Fm of a densely sampled record
+        // creates false valleys there. Peaks, not valleys, are the reference so that the recovery
+        // from the transient dip does not end the scan.
+        double leave = 4 * p.yieldDropPercent() / 100 * f[reh.index()];
         List<Integer> minima = new ArrayList<>();
         boolean seekingMinimum = true;
         int extreme = reh.dropIndex();
+        int highestPeak = -1;
         for (int j = reh.dropIndex(); j <= fmIndex; j++) {
             if (seekingMinimum) {
                 if (f[j] < f[extreme]) {
@@ -47,8 +56,14 @@ record YieldRange(int lowIndex, int transientIndex, int minima, int lastValleyIn
             } else if (f[j] > f[extreme]) {
                 extreme = j;
             } else if (f[j] <= f[extreme] - h) {
+                if (highestPeak < 0 || f[extreme] > f[highestPeak]) {
+                    highestPeak = extreme;
+                }
                 seekingMinimum = true;
                 extreme = j;
+            }
+            if (highestPeak >= 0 && f[j] > f[highestPeak] + leave) {
+                break;
             }
         }
         if (minima.isEmpty()) {
