@@ -164,5 +164,4 @@ class CyclicAnalysisTest {
         CyclicParameters p = new CyclicParameters(3, 0.5, 20);
         assertThat(CyclicParameters.fromMap(p.asMap())).isEqualTo(p);
     }
-
 }
