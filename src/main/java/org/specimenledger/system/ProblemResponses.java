@@ -6,6 +6,8 @@ import java.util.ArrayList;
 import java.util.List;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.specimenledger.analysis.AnalysisRejected;
+import org.specimenledger.curve.CurveRejected;
 import org.specimenledger.shared.DuplicateRecord;
 import org.specimenledger.shared.FieldIssue;
 import org.specimenledger.shared.RecordNotFound;
@@ -73,6 +75,24 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
     ProblemDetail ruleViolation(RuleViolation e) {
         return withIssues(problem(HttpStatus.UNPROCESSABLE_CONTENT, "rule-violated", "Request breaks a rule",
                 e.getMessage()), e.issues());
+    }
+
+    /** A raw curve file the reader refused: the problem names the line and column in the file. */
+    @ExceptionHandler(CurveRejected.class)
+    ProblemDetail curveRejected(CurveRejected e) {
+        ProblemDetail problem = problem(HttpStatus.UNPROCESSABLE_CONTENT, "curve-rejected", "Curve file refused",
+                e.getMessage());
+        problem.setProperty("line", e.line());
+        problem.setProperty("column", e.column());
+        problem.setProperty("reason", e.reason());
+        return withIssues(problem, List.of(new FieldIssue("curve", e.getMessage())));
+    }
+
+    /** Arrays or geometry the analysis cannot work with (too few points, NaN...). */
+    @ExceptionHandler(AnalysisRejected.class)
+    ProblemDetail analysisRejected(AnalysisRejected e) {
+        return problem(HttpStatus.UNPROCESSABLE_CONTENT, "analysis-rejected", "Curve cannot be analysed",
+                e.getMessage());
     }
 
     @ExceptionHandler(ConstraintViolationException.class)
