@@ -28,7 +28,8 @@ import java.util.Objects;
  * or tabs are skipped anywhere (and counted in a warning when they come after the header), because
  * exporters often end a file with one and a skipped blank line cannot shift any value. A {@code #}
  * line after the header is rejected: a comment inside the data is more likely a spliced file than
- * an annotation. Quoted cells are not part of the contract and are rejected as non-numeric.
+ * an annotation. Quoted cells are not part of the contract: a quoted number is rejected as
+ * non-numeric (in an ignored column any text is left alone).
  *
  * <p>Every problem is a {@link CurveRejected} naming the line and column; no other exception escapes
  * for any input bytes. I/O failures of the stream itself surface as {@link UncheckedIOException}.

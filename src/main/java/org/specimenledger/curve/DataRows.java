@@ -23,7 +23,6 @@ final class DataRows {
 
     private static final VarHandle LONGS = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
 
-
     private final HeaderRow header;
     private final byte delimiter;
     private final boolean decimalCommaAllowed;

@@ -162,6 +162,13 @@ class CurveReaderAcceptsTest {
     }
 
     @Test
+    void acceptsValidNonAsciiTextInAnIgnoredColumn() {
+        RawCurve curve = read("force [N],chamber,extension [mm]\n1,23 °C,2\n3,Ω ok,4\n");
+
+        assertArrayEquals(new double[] {2, 4}, curve.extensionMm());
+    }
+
+    @Test
     void countsRepeatedTimeStampsInAWarning() {
         RawCurve curve = read("time [s],force [N],extension [mm]\n0,1,0\n0.1,2,0.1\n0.1,3,0.2\n0.1,4,0.3\n0.2,5,0.4\n");
 
