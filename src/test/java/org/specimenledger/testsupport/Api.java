@@ -50,6 +50,47 @@ public final class Api {
                 .POST(HttpRequest.BodyPublishers.ofString(body)));
     }
 
+    /** One part of a multipart/form-data body: name, optional file name, content type, bytes. */
+    public record Part(String name, String filename, String contentType, byte[] bytes) {
+
+        public static Part file(String name, String filename, byte[] bytes) {
+            return new Part(name, filename, "text/csv", bytes);
+        }
+
+        public static Part json(String name, String json) {
+            return new Part(name, null, "application/json", json.getBytes(StandardCharsets.UTF_8));
+        }
+    }
+
+    public Response multipart(String method, String path, Part... parts) {
+        String boundary = "----ledger-test-" + System.nanoTime();
+        var out = new java.io.ByteArrayOutputStream();
+        for (Part part : parts) {
+            StringBuilder head = new StringBuilder("--").append(boundary).append("\r\n")
+                    .append("Content-Disposition: form-data; name=\"").append(part.name()).append('"');
+            if (part.filename() != null) {
+                head.append("; filename=\"").append(part.filename()).append('"');
+            }
+            head.append("\r\nContent-Type: ").append(part.contentType()).append("\r\n\r\n");
+            out.writeBytes(head.toString().getBytes(StandardCharsets.UTF_8));
+            out.writeBytes(part.bytes());
+            out.writeBytes("\r\n".getBytes(StandardCharsets.UTF_8));
+        }
+        out.writeBytes(("--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8));
+        return send(request(path).header("Content-Type", "multipart/form-data; boundary=" + boundary)
+                .method(method, HttpRequest.BodyPublishers.ofByteArray(out.toByteArray())));
+    }
+
+    /** Sends raw bytes with a content type, e.g. a curve file uploaded as the whole body. */
+    public Response putBytes(String path, String contentType, byte[] bytes, String... headers) {
+        HttpRequest.Builder b = request(path).header("Content-Type", contentType)
+                .PUT(HttpRequest.BodyPublishers.ofByteArray(bytes));
+        for (int i = 0; i + 1 < headers.length; i += 2) {
+            b.header(headers[i], headers[i + 1]);
+        }
+        return send(b);
+    }
+
     private HttpRequest.Builder request(String path) {
         HttpRequest.Builder b = HttpRequest.newBuilder(URI.create("http://127.0.0.1:" + port + path))
                 .timeout(Duration.ofSeconds(60));

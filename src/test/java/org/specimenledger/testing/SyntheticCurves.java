@@ -1,0 +1,71 @@
+package org.specimenledger.testing;
+
+import java.nio.charset.StandardCharsets;
+import java.util.Locale;
+
+/**
+ * Curve files in the service's input format, generated from closed-form material models so that the
+ * expected properties are known exactly. Every number here is a model parameter, not a measurement.
+ */
+public final class SyntheticCurves {
+
+    private SyntheticCurves() {
+    }
+
+    /**
+     * Ramberg–Osgood ε = σ/E + 0.002·(σ/σ0.2)^n (Ramberg &amp; Osgood 1943, NACA TN 902) up to maxStrain,
+     * then a sudden fracture; force in kN, extension in mm over {@code leMm}, time in s at a constant strain
+     * rate.
+     */
+    public static byte[] rambergOsgood(double eMPa, double sigma02, double n, double s0Mm2, double leMm,
+            double maxStrain, int points) {
+        StringBuilder csv = new StringBuilder("# source: synthetic Ramberg-Osgood model for tests\n");
+        csv.append("time [s],force [kN],extension [mm]\n");
+        double ratePerS = 0.00025;
+        for (int i = 0; i < points; i++) {
+            double strain = maxStrain * i / (points - 1);
+            double stress = stressAt(strain, eMPa, sigma02, n);
+            csv.append(String.format(Locale.ROOT, "%.6f,%.9f,%.9f%n", strain / ratePerS, stress * s0Mm2 / 1000.0,
+                    strain * leMm));
+        }
+        // fracture: the force falls away within two samples
+        double last = maxStrain * leMm;
+        csv.append(String.format(Locale.ROOT, "%.6f,%.9f,%.9f%n", maxStrain / ratePerS + 1, 0.02 * sigma02 * s0Mm2
+                / 1000.0, last + 0.001));
+        csv.append(String.format(Locale.ROOT, "%.6f,%.9f,%.9f%n", maxStrain / ratePerS + 2, 0.0, last + 0.002));
+        return csv.toString().getBytes(StandardCharsets.UTF_8);
+    }
+
+    /** Loading–unloading cycles F = k·x (loading) and F = k·x²/xmax (unloading) with known loop areas. */
+    public static byte[] triangleCycles(double stiffnessNPerMm, double peakMm, int cycles, int pointsPerBranch) {
+        StringBuilder csv = new StringBuilder("force [N],extension [mm]\n");
+        for (int c = 0; c < cycles; c++) {
+            for (int i = 0; i < pointsPerBranch; i++) {
+                double x = peakMm * i / pointsPerBranch;
+                csv.append(String.format(Locale.ROOT, "%.9f,%.9f%n", stiffnessNPerMm * x, x));
+            }
+            for (int i = 0; i < pointsPerBranch; i++) {
+                double x = peakMm * (pointsPerBranch - i) / pointsPerBranch;
+                csv.append(String.format(Locale.ROOT, "%.9f,%.9f%n", stiffnessNPerMm * x * x / peakMm, x));
+            }
+        }
+        csv.append(String.format(Locale.ROOT, "%.9f,%.9f%n", 0.0, 0.0));
+        return csv.toString().getBytes(StandardCharsets.UTF_8);
+    }
+
+    /** Inverts the Ramberg–Osgood strain by bisection: the stress whose model strain is {@code strain}. */
+    static double stressAt(double strain, double eMPa, double sigma02, double n) {
+        double lo = 0;
+        double hi = eMPa * strain + 1;
+        for (int k = 0; k < 200; k++) {
+            double mid = (lo + hi) / 2;
+            double e = mid / eMPa + 0.002 * Math.pow(mid / sigma02, n);
+            if (e < strain) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return (lo + hi) / 2;
+    }
+}
