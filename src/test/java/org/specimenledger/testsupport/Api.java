@@ -26,6 +26,13 @@ public final class Api {
                 .encodeToString((username + ":" + password).getBytes(StandardCharsets.UTF_8));
     }
 
+    /** Credentials of an account made in a test, for signing in as it. */
+    public record Signed(int port, String username, String password) {
+        public Api api() {
+            return new Api(port, username, password);
+        }
+    }
+
     public Response get(String path) {
         return send(request(path).GET());
     }
