@@ -1,5 +1,8 @@
 package org.specimenledger.testing;
 
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.servlet.http.HttpServletResponse;
+import java.io.IOException;
 import java.net.URI;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -7,7 +10,9 @@ import java.util.Map;
 import org.specimenledger.shared.FieldIssue;
 import org.springframework.core.Ordered;
 import org.springframework.core.annotation.Order;
+import org.springframework.http.HttpHeaders;
 import org.springframework.http.HttpStatus;
+import org.springframework.http.MediaType;
 import org.springframework.http.ProblemDetail;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.RestControllerAdvice;
@@ -34,12 +39,26 @@ class TestingProblems {
         return p;
     }
 
+    /**
+     * Written and flushed at once, with the connection to be closed: the client is still sending a body
+     * nobody will read, and the answer must reach it before the server stops listening to the rest.
+     */
     @ExceptionHandler(CurveTooLarge.class)
-    ProblemDetail tooLarge(CurveTooLarge e) {
-        ProblemDetail p = problem(HttpStatus.CONTENT_TOO_LARGE, "curve-too-large", "Curve file too large",
-                e.getMessage());
-        p.setProperty("limitBytes", e.limitBytes());
-        return p;
+    void tooLarge(CurveTooLarge e, HttpServletRequest request, HttpServletResponse response) throws IOException {
+        Map<String, Object> body = new LinkedHashMap<>();
+        body.put("type", TYPE_PREFIX + "curve-too-large");
+        body.put("title", "Curve file too large");
+        body.put("status", HttpStatus.CONTENT_TOO_LARGE.value());
+        body.put("detail", e.getMessage());
+        body.put("instance", request.getRequestURI());
+        body.put("limitBytes", e.limitBytes());
+        byte[] bytes = StoredJson.MAPPER.writeValueAsBytes(body);
+        response.setStatus(HttpStatus.CONTENT_TOO_LARGE.value());
+        response.setHeader(HttpHeaders.CONNECTION, "close");
+        response.setContentType(MediaType.APPLICATION_PROBLEM_JSON_VALUE);
+        response.setContentLength(bytes.length);
+        response.getOutputStream().write(bytes);
+        response.flushBuffer();
     }
 
     @ExceptionHandler(DuplicateCurve.class)

@@ -76,7 +76,8 @@ final class TestRunFixtures {
 
     /** A Ramberg–Osgood curve for the bench specimen: E 200 GPa, σ0.2 = 300 MPa, n = 10, to 5 % strain. */
     static byte[] curve(Bench b) {
-        return SyntheticCurves.rambergOsgood(200_000, 300, 10, b.s0Mm2(), 50, 0.05, 2000);
+        return SyntheticCurves.labelled("specimen: " + b.labIdentifier(),
+                SyntheticCurves.rambergOsgood(200_000, 300, 10, b.s0Mm2(), 50, 0.05, 2000));
     }
 
     static String instrument(Api manager, Map<String, Object> body) {

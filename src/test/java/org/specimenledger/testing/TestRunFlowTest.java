@@ -144,7 +144,8 @@ class TestRunFlowTest extends TestRunTesting {
         String id = register(body);
         // loading F = k x, unloading F = k x^2 / xm: loading energy k xm^2 / 2, returned k xm^2 / 3 (exact
         // integrals), loss ratio 100 (1/2 - 1/3) / (1/2) = 33.3 %
-        JsonNode analysis = uploaded(id, SyntheticCurves.triangleCycles(1000, 2, 3, 400)).get("analysis");
+        JsonNode analysis = uploaded(id, SyntheticCurves.labelled("specimen: " + b.labIdentifier(),
+                SyntheticCurves.triangleCycles(1000, 2, 3, 400))).get("analysis");
         assertThat(analysis.get("methodVersion").asString()).isEqualTo("cyclic/1.0.0");
         JsonNode first = analysis.get("results").get("cycles").get(0);
         assertThat(first.get("lossRatio").asDouble()).isCloseTo(100.0 / 3, within(0.05));
