@@ -124,8 +124,10 @@ CREATE TABLE raw_curve_content (
     sha256        text      NOT NULL,
     size_bytes    bigint    NOT NULL,
     content       bytea     NOT NULL,
-    -- the bytes are exactly what the description says: same fingerprint, same size
-    FOREIGN KEY (raw_curve_id, sha256, size_bytes) REFERENCES raw_curve (id, sha256, size_bytes),
+    -- the bytes are exactly what the description says: same fingerprint, same size. Checked at commit, so
+    -- the bytes may be written while the file is still being read and its description written after.
+    FOREIGN KEY (raw_curve_id, sha256, size_bytes) REFERENCES raw_curve (id, sha256, size_bytes)
+        DEFERRABLE INITIALLY DEFERRED,
     CHECK (octet_length(content) = size_bytes),
     CHECK (encode(sha256(content), 'hex') = sha256)
 );

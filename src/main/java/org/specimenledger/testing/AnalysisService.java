@@ -28,6 +28,8 @@ import org.springframework.transaction.annotation.Transactional;
 @Service
 public class AnalysisService {
 
+    private static final org.slf4j.Logger log = org.slf4j.LoggerFactory.getLogger(AnalysisService.class);
+
     static final String ENTITY = "analysis";
 
     private final AnalysisArchive archive;
@@ -126,8 +128,10 @@ public class AnalysisService {
         List<CalibrationUsed> calibrations = calibrationsOn(run);
         Map<String, Object> parameters = AnalysisComputation.merged(
                 AnalysisComputation.defaults(run.mode(), run.standard(), calibrations), requested);
+        long t0 = System.nanoTime();
         AnalysisComputation.Outcome o = AnalysisComputation.compute(raw, run.mode(), parameters, geometry,
                 RunConditions.of(run), calibrations);
+        log.debug("analysis of test run {} computed in {} ms", run.id(), (System.nanoTime() - t0) / 1_000_000);
         Instant now = clock.instant().truncatedTo(ChronoUnit.MICROS);
         AnalysisArchive.Row row = new AnalysisArchive.Row(UUID.randomUUID(), run.id(), archive.nextSequence(run.id()),
                 file.id(), file.sha256(), run.mode(), build.version(), build.commit(), o.methodVersion(),

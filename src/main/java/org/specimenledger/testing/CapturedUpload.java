@@ -5,10 +5,10 @@ import java.io.InputStream;
 import java.util.Arrays;
 
 /**
- * Passes an upload's bytes to the curve reader while keeping a copy, so the file is read from the network
- * once: parsed and fingerprinted on the way, and held for storage. Holds at most {@code limit} bytes; one
- * more and it throws {@link CurveTooLarge}. When the size is announced (Content-Length), the copy is
- * allocated once at that size.
+ * Takes in an upload's bytes, keeping a copy of everything read through it: the file is held once in
+ * memory, for the reader and the store alike. Holds at most {@code limit} bytes; one more and it throws
+ * {@link CurveTooLarge}. When the size is announced (Content-Length), the copy is allocated once at that
+ * size. Read through it (as a stream) or {@link #drain()} it.
  */
 final class CapturedUpload extends InputStream {
 
@@ -46,7 +46,7 @@ final class CapturedUpload extends InputStream {
         return n;
     }
 
-    /** Reads whatever the reader left unread (it stops at the end, so normally nothing). */
+    /** Reads the rest of the upload into the copy. */
     void drain() throws IOException {
         byte[] buffer = new byte[8192];
         while (read(buffer, 0, buffer.length) >= 0) {

@@ -7,17 +7,32 @@ import java.util.UUID;
  * the interface is the seam along which they can move to an S3-compatible object store (DESIGN.md, "Scale
  * path") while their descriptions stay in the database. Implementations store write-once: no update, no
  * delete.
+ *
+ * <p>A write runs in the background, in the caller's transaction, while the caller reads the same bytes
+ * (tens of megabytes take about as long to store as to parse); the caller must {@link Pending#await()} it
+ * before it uses the transaction again, and it becomes durable only when that transaction commits.
  */
 interface CurveContentStore {
 
+    /** A write under way. */
+    interface Pending {
+
+        /** Waits for the write to end; rethrows its failure. */
+        void await();
+
+        /** Waits for the write to end, ignoring how: the transaction is being abandoned anyway. */
+        void abandon();
+    }
+
     /**
-     * Stores the bytes of a described curve, in the caller's transaction.
+     * Starts storing the bytes of a curve in the caller's transaction; its description (same id, SHA-256 and
+     * size) must be stored in the same transaction.
      *
-     * @param rawCurveId the description's id, already stored
+     * @param rawCurveId the description's id
      * @param sha256     the SHA-256 of {@code content} as lower-case hex (the store may verify it)
-     * @param content    the exact bytes as received; not modified
+     * @param content    the exact bytes as received; must not change until the write has ended
      */
-    void put(UUID rawCurveId, String sha256, byte[] content);
+    Pending put(UUID rawCurveId, String sha256, byte[] content);
 
     /**
      * The bytes exactly as stored.

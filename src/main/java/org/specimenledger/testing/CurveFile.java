@@ -53,9 +53,9 @@ class CurveFile {
     protected CurveFile() {
     }
 
-    CurveFile(UUID testRunId, String sha256, long sizeBytes, String mediaType, String originalName, int points,
+    CurveFile(UUID id, UUID testRunId, String sha256, long sizeBytes, String mediaType, String originalName, int points,
             UUID duplicateOfTestRunId, String duplicateReason, Instant receivedAt, String receivedBy) {
-        this.id = UUID.randomUUID();
+        this.id = id;
         this.testRunId = testRunId;
         this.sha256 = sha256;
         this.sizeBytes = sizeBytes;

@@ -8,6 +8,8 @@ import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.List;
 import java.util.UUID;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
 import org.specimenledger.audit.Ledger;
 import org.specimenledger.curve.CurveReader;
 import org.specimenledger.curve.RawCurve;
@@ -22,13 +24,15 @@ import org.springframework.transaction.support.TransactionTemplate;
 
 /**
  * Takes in a test run's raw curve file: refuses it before reading when it is announced above the limit,
- * reads it once (parsed, fingerprinted and copied on the way), refuses a malformed file or bytes already
- * stored for another run, then stores the bytes with their description and the first analysis in one
- * transaction. Nothing of a refused upload is stored or ledgered. The file is read before the transaction
- * begins, so no database connection waits on the network.
+ * takes it into memory (at most the limit), refuses bytes already stored for another run or a malformed
+ * file, and stores the bytes with their description and the first analysis in one transaction. Nothing of
+ * a refused upload is stored or ledgered. The file is taken in before the transaction begins, so no database
+ * connection waits on the network.
  */
 @Service
 public class CurveIntake {
+
+    private static final Logger log = LoggerFactory.getLogger(CurveIntake.class);
 
     static final String ENTITY = "raw-curve";
 
@@ -82,31 +86,41 @@ public class CurveIntake {
     }
 
     Received receive(UUID testRunId, Upload upload) {
+        long t0 = System.nanoTime();
         readOnly.executeWithoutResult(t -> refuseSecondCurve(testRunId));
         long limit = settings.maxSize().toBytes();
         if (upload.contentLength() > limit) {
             throw new CurveTooLarge(upload.contentLength(), limit);
         }
         CapturedUpload captured = new CapturedUpload(upload.body(), upload.contentLength(), limit);
-        RawCurve raw = new CurveReader(settings.limits()).read(captured);
         try {
             captured.drain();
         } catch (IOException e) {
             throw new UncheckedIOException("reading the upload failed", e);
         }
         byte[] bytes = captured.bytes();
-        return transaction.execute(t -> store(testRunId, upload, raw, bytes));
+        long t1 = System.nanoTime();
+        Received received = transaction.execute(t -> store(testRunId, upload, bytes));
+        log.debug("curve of test run {}: {} bytes received in {} ms, read, stored and analysed in {} ms", testRunId,
+                bytes.length, (t1 - t0) / 1_000_000, (System.nanoTime() - t1) / 1_000_000);
+        return received;
     }
 
-    private Received store(UUID testRunId, Upload upload, RawCurve raw, byte[] bytes) {
+    /**
+     * Fingerprints the bytes, refuses a duplicate, then stores them while the reader parses them (the two
+     * take about as long), and only then writes the description, the analysis and the ledger events. Any
+     * refusal rolls the whole transaction back, bytes included.
+     */
+    private Received store(UUID testRunId, Upload upload, byte[] bytes) {
         TestRun run = refuseSecondCurve(testRunId);
-        List<CurveFile> same = files.findAllBySha256AndTestRunIdNotOrderByReceivedAtAsc(raw.sha256(), testRunId);
+        String sha256 = AnalysisReplay.sha256(bytes);
+        List<CurveFile> same = files.findAllBySha256AndTestRunIdNotOrderByReceivedAtAsc(sha256, testRunId);
         UUID duplicateOf = null;
         String duplicateReason = null;
         if (!same.isEmpty()) {
             UUID other = same.get(0).testRunId();
             if (!upload.confirmDuplicate()) {
-                throw new DuplicateCurve(other, raw.sha256(), "the same bytes (SHA-256 " + raw.sha256()
+                throw new DuplicateCurve(other, sha256, "the same bytes (SHA-256 " + sha256
                         + ") are already the raw curve of test run " + other + "; if this run really produced an "
                         + "identical file, upload it again with confirmDuplicate=true and a reason");
             }
@@ -117,15 +131,32 @@ public class CurveIntake {
             }
             duplicateOf = other;
         }
+        UUID curveId = UUID.randomUUID();
+        long t0 = System.nanoTime();
+        CurveContentStore.Pending write = store.put(curveId, sha256, bytes);
+        RawCurve raw;
+        try {
+            raw = new CurveReader(settings.limits()).read(bytes);
+        } catch (RuntimeException refused) {
+            write.abandon();
+            throw refused;
+        }
+        long t1 = System.nanoTime();
+        write.await();
+        long t2 = System.nanoTime();
+        if (!raw.sha256().equals(sha256)) {
+            throw new IllegalStateException("the reader's fingerprint " + raw.sha256() + " differs from " + sha256);
+        }
         Instant now = clock.instant().truncatedTo(ChronoUnit.MICROS);
         String actor = TestRunService.actor();
-        CurveFile file = files.saveAndFlush(new CurveFile(testRunId, raw.sha256(), bytes.length,
+        CurveFile file = files.saveAndFlush(new CurveFile(curveId, testRunId, sha256, bytes.length,
                 mediaType(upload.mediaType()), name(upload.originalName()), raw.size(), duplicateOf, duplicateReason,
                 now, actor));
-        store.put(file.id(), raw.sha256(), bytes);
         RawCurveView view = RawCurveView.of(file);
         ledger.record("curve.received", ENTITY, file.id(), duplicateReason, null, view);
         AnalysisRunView analysis = analyses.recordFirst(run, file, raw);
+        log.debug("curve of test run {}: parsed in {} ms, bytes stored {} ms after, analysis recorded in {} ms",
+                testRunId, (t1 - t0) / 1_000_000, (t2 - t1) / 1_000_000, (System.nanoTime() - t2) / 1_000_000);
         return new Received(view, analysis);
     }
 
