@@ -16,6 +16,9 @@ import tools.jackson.databind.JsonNode;
 /** Re-analysis with other parameters, the current-analysis pointer, the flags shown with results, queries and CSV. */
 class AnalysisApiTest extends TestRunTesting {
 
+    @org.springframework.beans.factory.annotation.Autowired
+    private org.springframework.transaction.support.TransactionTemplate transactions;
+
     private static List<String> codes(JsonNode analysis) {
         return analysis.get("flags").valueStream().map(f -> f.get("code").asString()).toList();
     }
@@ -72,6 +75,36 @@ class AnalysisApiTest extends TestRunTesting {
         assertThat(technician().get("/api/v1/tests/" + id).json().get("currentAnalysisId").asString()).isEqualTo(firstId);
         assertThat(technician().post("/api/v1/analyses/" + second.get("id").asString() + "/replay", "")
                 .json().get("identical").asBoolean()).isTrue();
+    }
+
+    @Test
+    void replayListsEveryValueThatNoLongerReproducesNamingBothSoftwareVersions() {
+        TestRunFixtures.Bench b = bench();
+        String id = register(b);
+        JsonNode analysis = uploaded(id, TestRunFixtures.curve(b)).get("analysis");
+        String analysisId = analysis.get("id").asString();
+        double rm = analysis.get("results").get("properties").get("Rm").get("value").asDouble();
+        // an alteration behind the application's back, as the table owner who can switch the guard off: the
+        // replay must find it
+        transactions.executeWithoutResult(t -> {
+            jdbc.sql("ALTER TABLE analysis_run DISABLE TRIGGER analysis_run_append_only").update();
+            jdbc.sql("UPDATE analysis_run SET results = jsonb_set(results, '{properties,Rm,value}', '500.0'::jsonb) "
+                    + "WHERE id = ?").param(UUID.fromString(analysisId)).update();
+            jdbc.sql("ALTER TABLE analysis_run ENABLE TRIGGER analysis_run_append_only").update();
+        });
+        JsonNode replay = as("t-auditor").post("/api/v1/analyses/" + analysisId + "/replay", "").json();
+        assertThat(replay.get("identical").asBoolean()).isFalse();
+        assertThat(replay.get("inputFingerprintMatches").asBoolean()).isTrue();
+        assertThat(replay.get("differenceCount").asInt()).isEqualTo(1);
+        JsonNode difference = replay.get("differences").get(0);
+        assertThat(difference.get("pointer").asString()).isEqualTo("/results/properties/Rm/value");
+        assertThat(difference.get("stored").asDouble()).isEqualTo(500.0);
+        assertThat(difference.get("replayed").asDouble()).isEqualTo(rm);
+        assertThat(replay.get("stored").get("commit").asString()).isNotBlank();
+        assertThat(replay.get("replayed").get("commit").asString()).isEqualTo(replay.get("stored").get("commit").asString());
+        JsonNode event = events("analysis", analysisId).get(1);
+        assertThat(event.get("action").asString()).isEqualTo("analysis.replayed");
+        assertThat(event.get("after").get("identical").asBoolean()).isFalse();
     }
 
     @Test
