@@ -1,5 +1,5 @@
 /**
- * Tensile tests as the laboratory runs them: the adapter between stored records and the pure
- * {@code curve} and {@code analysis} core, starting with the stateless analysis preview.
+ * Tensile tests as the laboratory runs them: test runs through the calibration gate, their raw curves kept
+ * byte for byte, the analysis runs computed from them and their replay, and the stateless analysis preview.
  */
 package org.specimenledger.testing;

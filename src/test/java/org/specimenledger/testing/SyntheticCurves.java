@@ -53,6 +53,17 @@ public final class SyntheticCurves {
         return csv.toString().getBytes(StandardCharsets.UTF_8);
     }
 
+    /**
+     * The same file with a {@code # key: value} metadata line in front, so that two runs of one model give
+     * different bytes (a laboratory never stores the same file twice without saying why).
+     */
+    public static byte[] labelled(String metadata, byte[] curve) {
+        byte[] head = ("# " + metadata + "\n").getBytes(StandardCharsets.UTF_8);
+        byte[] out = java.util.Arrays.copyOf(head, head.length + curve.length);
+        System.arraycopy(curve, 0, out, head.length, curve.length);
+        return out;
+    }
+
     /** Inverts the Ramberg–Osgood strain by bisection: the stress whose model strain is {@code strain}. */
     static double stressAt(double strain, double eMPa, double sigma02, double n) {
         double lo = 0;

@@ -98,6 +98,26 @@ public final class Api {
         return send(b);
     }
 
+    /** A response read as bytes, with its headers: for downloads that must come back byte for byte. */
+    public record Download(int status, byte[] body, java.net.http.HttpHeaders headers) {
+
+        public String header(String name) {
+            return headers.firstValue(name).orElse(null);
+        }
+    }
+
+    public Download getBytes(String path) {
+        try {
+            HttpResponse<byte[]> r = HTTP.send(request(path).GET().build(), HttpResponse.BodyHandlers.ofByteArray());
+            return new Download(r.statusCode(), r.body(), r.headers());
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException(e);
+        }
+    }
+
     private HttpRequest.Builder request(String path) {
         HttpRequest.Builder b = HttpRequest.newBuilder(URI.create("http://127.0.0.1:" + port + path))
                 .timeout(Duration.ofSeconds(60));

@@ -1,0 +1,133 @@
+package org.specimenledger.testing;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.specimenledger.analysis.CrossSectionShape;
+import org.specimenledger.analysis.CyclicAnalysis;
+import org.specimenledger.analysis.CyclicParameters;
+import org.specimenledger.analysis.CyclicResult;
+import org.specimenledger.analysis.RoundingRule;
+import org.specimenledger.analysis.TensileAnalysis;
+import org.specimenledger.analysis.TensileParameters;
+import org.specimenledger.analysis.TensileResult;
+import org.specimenledger.analysis.UncertaintyInputs;
+import org.specimenledger.curve.RawCurve;
+import org.specimenledger.shared.RuleViolation;
+import tools.jackson.databind.JsonNode;
+
+/**
+ * One computation from a read curve: the engine run with a stored parameter set, and everything an
+ * analysis run keeps of it as normalised JSON trees. Both the analysis on upload and the replay go through
+ * here, so a replay runs exactly the code path that produced the stored values.
+ */
+final class AnalysisComputation {
+
+    /**
+     * What an analysis stores.
+     *
+     * @param parameters the complete parameter set as stored (the engine's own {@code asMap()})
+     */
+    record Outcome(String methodVersion, JsonNode parameters, JsonNode input, JsonNode results, JsonNode flags,
+            List<ResultFlag> flagList) {
+
+        /** The tree a replay compares: input, results and flags together. */
+        JsonNode comparable() {
+            var node = StoredJson.MAPPER.createObjectNode();
+            node.set("input", input);
+            node.set("results", results);
+            node.set("flags", flags);
+            return node;
+        }
+    }
+
+    private AnalysisComputation() {
+    }
+
+    /**
+     * Runs the engine.
+     *
+     * @param parameters a complete or partial parameter map of the mode's engine (missing keys take the
+     *                   engine's defaults)
+     * @throws RuleViolation naming {@code /parameters} when the map is not a valid parameter set
+     * @throws org.specimenledger.analysis.AnalysisRejected when the engine cannot work with the arrays or geometry
+     */
+    static Outcome compute(RawCurve curve, TestMode mode, Map<String, Object> parameters, GeometryUsed geometry,
+            RunConditions run, List<CalibrationUsed> calibrations) {
+        if (mode == TestMode.CYCLIC) {
+            CyclicParameters p = cyclicParameters(parameters);
+            CyclicResult r = CyclicAnalysis.analyse(curve.forceN(), curve.extensionMm(), p);
+            List<ResultFlag> flags = ResultFlags.of(run, geometry, calibrations, null, r);
+            return outcome(r.methodVersion(), p.asMap(), curve, AnalysisReports.cyclic(r), flags);
+        }
+        TensileParameters p = tensileParameters(parameters);
+        TensileResult r = TensileAnalysis.analyse(curve.forceN(), curve.extensionMm(),
+                curve.hasTime() ? curve.timeS() : null, geometry.tensileSpecimen(), p);
+        List<ResultFlag> flags = ResultFlags.of(run, geometry, calibrations, r, null);
+        return outcome(r.methodVersion(), p.asMap(), curve, AnalysisReports.tensile(r), flags);
+    }
+
+    /**
+     * The parameters a run starts with: the engine defaults, with the uncertainty budget taking the force
+     * and extensometer classes of the calibrations used (instead of the class 1 the engine assumes), and
+     * the ASTM rounding practice for ASTM runs.
+     */
+    static Map<String, Object> defaults(TestMode mode, TestStandard standard, List<CalibrationUsed> calibrations) {
+        if (mode == TestMode.CYCLIC) {
+            return new LinkedHashMap<>(CyclicParameters.defaults().asMap());
+        }
+        UncertaintyInputs u = UncertaintyInputs.defaults();
+        double force = u.forceClassPercent();
+        double extensometer = u.extensometerClassPercent();
+        double bias = u.extensometerBiasLimitUm();
+        for (CalibrationUsed c : calibrations) {
+            if (c.accuracyClass() == null) {
+                continue;
+            }
+            double cls = Double.parseDouble(c.accuracyClass());
+            if (c.role() == InstrumentRole.FORCE_TRANSDUCER) {
+                force = cls; // ISO 7500-1: class k allows ±k % relative accuracy error [M]
+            } else if (c.role() == InstrumentRole.EXTENSOMETER) {
+                extensometer = cls; // ISO 9513: class k allows ±k % bias or 3k µm, the larger [M]
+                bias = 3 * cls;
+            }
+        }
+        TensileParameters p = TensileParameters.defaults().withUncertainty(new UncertaintyInputs(force, extensometer,
+                bias, CrossSectionShape.DIRECT, 0, 0, 0, 0, 0, 0));
+        if (standard == TestStandard.ASTM_E8 || standard == TestStandard.ASTM_E8M) {
+            p = p.withRounding(RoundingRule.ASTM_PRACTICE);
+        }
+        return new LinkedHashMap<>(p.asMap());
+    }
+
+    /** The defaults with the requested keys replaced; an unknown key is refused when the engine reads it. */
+    static Map<String, Object> merged(Map<String, Object> defaults, Map<String, Object> requested) {
+        Map<String, Object> out = new LinkedHashMap<>(defaults);
+        if (requested != null) {
+            out.putAll(requested);
+        }
+        return out;
+    }
+
+    private static Outcome outcome(String methodVersion, Map<String, Object> parameters, RawCurve curve,
+            Map<String, Object> results, List<ResultFlag> flags) {
+        return new Outcome(methodVersion, StoredJson.tree(parameters), StoredJson.tree(AnalysisReports.input(curve)),
+                StoredJson.tree(results), StoredJson.tree(flags), flags);
+    }
+
+    private static TensileParameters tensileParameters(Map<String, Object> map) {
+        try {
+            return TensileParameters.fromMap(map);
+        } catch (IllegalArgumentException | ClassCastException e) {
+            throw new RuleViolation("/parameters", e.getMessage());
+        }
+    }
+
+    private static CyclicParameters cyclicParameters(Map<String, Object> map) {
+        try {
+            return CyclicParameters.fromMap(map);
+        } catch (IllegalArgumentException | ClassCastException e) {
+            throw new RuleViolation("/parameters", e.getMessage());
+        }
+    }
+}

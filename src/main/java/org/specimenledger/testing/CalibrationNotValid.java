@@ -1,0 +1,22 @@
+package org.specimenledger.testing;
+
+import java.util.List;
+import java.util.stream.Collectors;
+
+/**
+ * A test run refused by the calibration gate: which instruments fail and why. 422; a lab manager may
+ * accept the run anyway with a written {@code calibrationOverrideReason}.
+ */
+class CalibrationNotValid extends RuntimeException {
+
+    private final List<CalibrationGate.Finding> findings;
+
+    CalibrationNotValid(List<CalibrationGate.Finding> findings) {
+        super(findings.stream().map(CalibrationGate.Finding::line).collect(Collectors.joining("; ")));
+        this.findings = List.copyOf(findings);
+    }
+
+    List<CalibrationGate.Finding> findings() {
+        return findings;
+    }
+}

@@ -1,0 +1,67 @@
+package org.specimenledger.testing;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+
+/**
+ * A result set as CSV (RFC 4180: comma-separated, CRLF line ends, fields with a comma, quote or line end
+ * quoted with inner quotes doubled), one row per test run. The header names each property with its unit,
+ * e.g. {@code Rp0.2 [MPa]}; property cells hold the reported (rounded) value, empty when not determined.
+ */
+final class ResultTable {
+
+    private static final List<String> FIXED = List.of("specimen", "test run", "test date", "standard", "mode",
+            "validity", "analysis", "software version", "method version", "input SHA-256");
+
+    private ResultTable() {
+    }
+
+    static String csv(List<ResultRow> rows) {
+        Map<String, String> units = new LinkedHashMap<>();
+        for (ResultRow r : rows) {
+            r.properties().forEach((symbol, v) -> units.putIfAbsent(symbol, v.unit()));
+        }
+        StringBuilder out = new StringBuilder();
+        List<String> header = new ArrayList<>(FIXED);
+        units.forEach((symbol, unit) -> header.add(symbol + " [" + unit + "]"));
+        header.add("cycles");
+        header.add("flags");
+        line(out, header);
+        for (ResultRow r : rows) {
+            List<String> cells = new ArrayList<>(List.of(r.labIdentifier(), r.testRunId().toString(),
+                    r.testDate().toString(), r.standard().name(), r.mode().name(), r.validity().name(),
+                    r.analysisId().toString(), r.softwareVersion(), r.methodVersion(), r.inputSha256()));
+            for (String symbol : units.keySet()) {
+                ResultRow.Value v = r.properties().get(symbol);
+                cells.add(v == null || v.reported() == null ? "" : v.reported());
+            }
+            cells.add(r.cycles() == null ? "" : r.cycles().toString());
+            cells.add(r.flags().stream().map(ResultFlag::code).distinct().collect(Collectors.joining(" ")));
+            line(out, cells);
+        }
+        return out.toString();
+    }
+
+    private static void line(StringBuilder out, List<String> cells) {
+        for (int i = 0; i < cells.size(); i++) {
+            if (i > 0) {
+                out.append(',');
+            }
+            out.append(field(cells.get(i)));
+        }
+        out.append("\r\n");
+    }
+
+    static String field(String s) {
+        if (s == null) {
+            return "";
+        }
+        if (s.indexOf(',') >= 0 || s.indexOf('"') >= 0 || s.indexOf('\n') >= 0 || s.indexOf('\r') >= 0) {
+            return '"' + s.replace("\"", "\"\"") + '"';
+        }
+        return s;
+    }
+}

@@ -1,0 +1,180 @@
+package org.specimenledger.testing;
+
+import io.swagger.v3.oas.annotations.Operation;
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.validation.Valid;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.util.Base64;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.UUID;
+import org.specimenledger.shared.Access;
+import org.springframework.http.ContentDisposition;
+import org.springframework.http.HttpHeaders;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.InvalidMediaTypeException;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
+import org.springframework.security.access.prepost.PreAuthorize;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.PutMapping;
+import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RequestHeader;
+import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.bind.annotation.ResponseStatus;
+import org.springframework.web.bind.annotation.RestController;
+
+/**
+ * Test runs, their raw curves and their analyses. Laboratory workers register, upload and re-analyse;
+ * laboratory roles and the auditor read and download raw data; a customer reads their own organisation's
+ * runs and results (any other is 404) but not raw data.
+ */
+@RestController
+@RequestMapping("/api/v1")
+class TestRunController {
+
+    /** Our own header with the raw curve's SHA-256 in hex, beside the standard {@code Repr-Digest} (RFC 9530). */
+    static final String SHA256_HEADER = "Curve-SHA256";
+
+    private final TestRunService runs;
+    private final CurveIntake intake;
+    private final AnalysisService analyses;
+    private final AnalysisReplay replay;
+
+    TestRunController(TestRunService runs, CurveIntake intake, AnalysisService analyses, AnalysisReplay replay) {
+        this.runs = runs;
+        this.intake = intake;
+        this.analyses = analyses;
+        this.replay = replay;
+    }
+
+    @PostMapping("/tests")
+    @ResponseStatus(HttpStatus.CREATED)
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Register a test run; its instruments must pass the calibration gate (a lab manager may "
+            + "accept a refused run with calibrationOverrideReason)")
+    TestRunView register(@Valid @RequestBody TestRunRequests.TestRunRequest request) {
+        return runs.register(request);
+    }
+
+    @GetMapping("/tests")
+    @PreAuthorize(Access.ANY_SIGNED_IN)
+    @Operation(summary = "List test runs, optionally of one specimen (a customer sees only their own organisation's)")
+    List<TestRunView> list(@RequestParam(required = false) UUID specimenId) {
+        return runs.list(specimenId);
+    }
+
+    @GetMapping("/tests/{id}")
+    @PreAuthorize(Access.ANY_SIGNED_IN)
+    TestRunView get(@PathVariable UUID id) {
+        return runs.get(id);
+    }
+
+    @PostMapping("/tests/{id}/invalidate")
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Invalidate a test run (reason required); its curve and analyses stay")
+    TestRunView invalidate(@PathVariable UUID id, @Valid @RequestBody TestRunRequests.ReasonRequest request) {
+        return runs.invalidate(id, request.reason());
+    }
+
+    @PostMapping("/tests/{id}/reinstate")
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Make an invalidated run the valid one again (reason required)")
+    TestRunView reinstate(@PathVariable UUID id, @Valid @RequestBody TestRunRequests.ReasonRequest request) {
+        return runs.reinstate(id, request.reason());
+    }
+
+    @PutMapping(path = "/tests/{id}/curve", consumes = MediaType.ALL_VALUE)
+    @ResponseStatus(HttpStatus.CREATED)
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Upload the raw curve file as the request body, byte for byte (once per run); the "
+            + "first analysis is made at once. Same bytes as another run: 409 unless confirmDuplicate=true "
+            + "with a reason")
+    CurveIntake.Received upload(@PathVariable UUID id, HttpServletRequest request,
+            @RequestParam(defaultValue = "false") boolean confirmDuplicate,
+            @RequestParam(required = false) String reason,
+            @RequestParam(required = false) String filename,
+            @RequestHeader(name = HttpHeaders.CONTENT_DISPOSITION, required = false) String disposition)
+            throws IOException {
+        String name = filename;
+        if (name == null && disposition != null) {
+            try {
+                name = ContentDisposition.parse(disposition).getFilename();
+            } catch (IllegalArgumentException e) {
+                name = null; // a malformed header names no file; the bytes are what matters
+            }
+        }
+        return intake.receive(id, new CurveIntake.Upload(request.getInputStream(), request.getContentLengthLong(),
+                request.getContentType(), name, confirmDuplicate, reason));
+    }
+
+    @GetMapping("/tests/{id}/curve")
+    @PreAuthorize(Access.ANY_SIGNED_IN)
+    @Operation(summary = "Download the raw curve exactly as uploaded, with its SHA-256 in the Repr-Digest and "
+            + SHA256_HEADER + " headers (laboratory roles and auditor)")
+    ResponseEntity<byte[]> download(@PathVariable UUID id) {
+        CurveIntake.Download d = intake.download(id);
+        byte[] sha = HexFormat.of().parseHex(d.curve().sha256());
+        HttpHeaders headers = new HttpHeaders();
+        headers.setContentType(mediaType(d.curve().mediaType()));
+        headers.setContentLength(d.bytes().length);
+        headers.setContentDisposition(ContentDisposition.attachment()
+                .filename(d.curve().originalName() == null ? "curve-" + id + ".csv" : d.curve().originalName(),
+                        StandardCharsets.UTF_8)
+                .build());
+        headers.set("Repr-Digest", "sha-256=:" + Base64.getEncoder().encodeToString(sha) + ":");
+        headers.set(SHA256_HEADER, d.curve().sha256());
+        headers.setETag("\"" + d.curve().sha256() + "\"");
+        return new ResponseEntity<>(d.bytes(), headers, HttpStatus.OK);
+    }
+
+    @GetMapping("/tests/{id}/analyses")
+    @PreAuthorize(Access.ANY_SIGNED_IN)
+    @Operation(summary = "All analyses of a test run, oldest first")
+    List<AnalysisRunView> analysesOf(@PathVariable UUID id) {
+        return analyses.ofTestRun(id);
+    }
+
+    @PostMapping("/tests/{id}/analyses")
+    @ResponseStatus(HttpStatus.CREATED)
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Analyse the stored curve again with other parameters (reason required); the new "
+            + "analysis becomes current, the previous one stays")
+    AnalysisRunView reanalyse(@PathVariable UUID id, @Valid @RequestBody TestRunRequests.AnalysisRequest request) {
+        return analyses.reanalyse(id, request);
+    }
+
+    @PutMapping("/tests/{id}/current-analysis")
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Make an earlier analysis of the run its current one again (reason required)")
+    AnalysisRunView pointCurrent(@PathVariable UUID id,
+            @Valid @RequestBody TestRunRequests.CurrentAnalysisRequest request) {
+        return analyses.pointCurrent(id, request);
+    }
+
+    @GetMapping("/analyses/{id}")
+    @PreAuthorize(Access.ANY_SIGNED_IN)
+    AnalysisRunView analysis(@PathVariable UUID id) {
+        return analyses.get(id);
+    }
+
+    @PostMapping("/analyses/{id}/replay")
+    @PreAuthorize(Access.LAB_READERS)
+    @Operation(summary = "Recompute a stored analysis from the stored bytes and parameters with the running "
+            + "software and say whether every value is bit-identical; recorded in the ledger")
+    ReplayView replay(@PathVariable UUID id) {
+        return replay.replay(id);
+    }
+
+    private static MediaType mediaType(String stored) {
+        try {
+            return MediaType.parseMediaType(stored);
+        } catch (InvalidMediaTypeException e) {
+            return MediaType.APPLICATION_OCTET_STREAM;
+        }
+    }
+}
