@@ -1,58 +1,135 @@
 package org.specimenledger.audit;
 
+import java.sql.Connection;
+import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.OffsetDateTime;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.HexFormat;
 import javax.sql.DataSource;
-import org.springframework.jdbc.core.JdbcTemplate;
-import org.springframework.jdbc.core.RowCallbackHandler;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.dao.DataAccessResourceFailureException;
 import org.springframework.stereotype.Service;
-import org.springframework.transaction.annotation.Transactional;
+import tools.jackson.core.JacksonException;
+import tools.jackson.databind.DeserializationFeature;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Recomputes the whole chain from the stored canonical texts, streaming rows (PostgreSQL only streams
- * with a fetch size inside a transaction), so memory stays flat however long the ledger is.
+ * Recomputes the whole chain from the stored rows, streaming (PostgreSQL streams a result with a fetch
+ * size only inside a transaction), so memory stays flat however long the ledger is. Each event, in
+ * sequence order, must:
+ * <ol>
+ * <li>follow the one before without a gap ({@code missing-sequence});</li>
+ * <li>hash, as SHA-256 over its canonical text, to its stored hash ({@code hash-mismatch});</li>
+ * <li>name its own sequence number and the previous event's hash inside the canonical text
+ *     ({@code broken-link}; when an otherwise intact event names a different hash for its predecessor,
+ *     it is the predecessor that was rewritten and re-hashed, and the predecessor is named);</li>
+ * <li>match the Merkle leaf recorded when it was appended ({@code hash-mismatch});</li>
+ * <li>agree, column by column, with its canonical text: plain columns exactly, the {@code jsonb}
+ *     before/after values as JSON values with numbers compared by value ({@code column-mismatch}).</li>
+ * </ol>
+ * Finally the chain head row must name the last event and its hash (a removed or re-hashed last event).
+ *
+ * <p>Plain JDBC on purpose: the same verifier runs inside the service and over any other DataSource
+ * (a restored backup, a benchmark database) without Spring transactions.
  */
 @Service
 public class ChainVerifier {
 
-    private final JdbcTemplate jdbc;
+    private static final int FETCH_SIZE = 1000;
+    private static final HexFormat HEX = HexFormat.of();
+    private static final String[] CANONICAL_KEYS = {"action", "actor", "after", "before", "entityId", "entityType",
+        "occurredAt", "previousHash", "reason", "role", "seq"};
 
+    /** Floats as BigDecimal so that no digits are lost before comparing by value. */
+    private static final JsonMapper JSON = JsonMapper.builder()
+            .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS)
+            .build();
+
+    /** Numbers equal by value (1.50 = 1.5 = 15E-1); everything else by ordinary equality. */
+    private static final Comparator<JsonNode> BY_VALUE = (a, b) -> {
+        if (a.isNumber() && b.isNumber()) {
+            return a.decimalValue().compareTo(b.decimalValue());
+        }
+        return a.equals(b) ? 0 : 1;
+    };
+
+    private final DataSource dataSource;
+
+    @Autowired
     ChainVerifier(DataSource dataSource) {
-        this.jdbc = new JdbcTemplate(dataSource);
-        this.jdbc.setFetchSize(1000);
+        this.dataSource = dataSource;
     }
 
-    @Transactional(readOnly = true)
+    /** A verifier over any database holding the ledger tables, for use outside the service. */
+    public static ChainVerifier over(DataSource dataSource) {
+        return new ChainVerifier(dataSource);
+    }
+
+    /** Walks the whole chain in one read-only, repeatable-read snapshot. */
     public ChainVerification verify() {
-        Walk walk = new Walk();
-        jdbc.query("SELECT seq, previous_hash, hash, canonical FROM audit_event ORDER BY seq", walk);
-        return walk.result();
+        try (Connection c = dataSource.getConnection()) {
+            boolean autoCommit = c.getAutoCommit();
+            c.setAutoCommit(false);
+            try {
+                c.setTransactionIsolation(Connection.TRANSACTION_REPEATABLE_READ);
+                c.setReadOnly(true);
+                return walk(c);
+            } finally {
+                c.rollback();
+                c.setReadOnly(false);
+                c.setTransactionIsolation(Connection.TRANSACTION_READ_COMMITTED);
+                c.setAutoCommit(autoCommit);
+            }
+        } catch (SQLException e) {
+            throw new DataAccessResourceFailureException("could not read the ledger to verify it", e);
+        }
     }
 
-    /** Checks each row against the one before it; stops looking once the first break is found. */
-    private static final class Walk implements RowCallbackHandler {
+    private static ChainVerification walk(Connection c) throws SQLException {
+        long headSeq;
+        String headHash;
+        try (Statement s = c.createStatement();
+                ResultSet rs = s.executeQuery("SELECT last_seq, last_hash FROM audit_chain_head WHERE id = 1")) {
+            rs.next();
+            headSeq = rs.getLong(1);
+            headHash = rs.getString(2);
+        }
+        Walk walk = new Walk();
+        try (PreparedStatement ps = c.prepareStatement("""
+                SELECT e.seq, e.previous_hash, e.hash, e.canonical, e.occurred_at, e.actor, e.actor_role, e.action,
+                       e.entity_type, e.entity_id, e.reason, e.before_state::text, e.after_state::text,
+                       (SELECT n.hash FROM ledger_tree_node n WHERE n.level = 0 AND n.position = e.seq - 1)
+                  FROM audit_event e
+                 ORDER BY e.seq""")) {
+            ps.setFetchSize(FETCH_SIZE);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next() && walk.broken == null) {
+                    walk.row(rs);
+                }
+            }
+        }
+        return walk.result(headSeq, headHash);
+    }
+
+    /** Checks each row against the one before it; stops at the first break. */
+    private static final class Walk {
         private long expectedSeq = 1;
         private String previousHash = CanonicalEvent.GENESIS_HASH;
         private long checked;
         private ChainVerification broken;
 
-        @Override
-        public void processRow(ResultSet rs) throws SQLException {
-            if (broken != null) {
-                return;
-            }
+        void row(ResultSet rs) throws SQLException {
             long seq = rs.getLong(1);
-            String storedPrevious = rs.getString(2);
             String hash = rs.getString(3);
             String canonical = rs.getString(4);
             if (seq != expectedSeq) {
                 broken = ChainVerification.broken(checked, expectedSeq, "missing-sequence",
                         "expected event " + expectedSeq + " but the next stored event is " + seq);
-                return;
-            }
-            if (!previousHash.equals(storedPrevious) || !CanonicalEvent.links(canonical, seq, previousHash)) {
-                broken = ChainVerification.broken(checked, seq, "broken-link",
-                        "event " + seq + " does not name the hash of event " + (seq - 1));
                 return;
             }
             String recomputed = Sha256.hex(canonical);
@@ -61,13 +138,127 @@ public class ChainVerifier {
                         "SHA-256 of event " + seq + " is " + recomputed + ", stored " + hash);
                 return;
             }
+            JsonNode event;
+            try {
+                event = JSON.readTree(canonical);
+            } catch (JacksonException e) {
+                broken = ChainVerification.broken(checked, seq, "broken-link",
+                        "the canonical text of event " + seq + " is not JSON");
+                return;
+            }
+            if (!event.isObject() || event.path("seq").asLong(-1) != seq) {
+                broken = ChainVerification.broken(checked, seq, "broken-link",
+                        "the canonical text stored at position " + seq + " is that of event " + event.path("seq"));
+                return;
+            }
+            String namedPrevious = text(event.get("previousHash"));
+            if (!previousHash.equals(namedPrevious)) {
+                if (seq == 1) {
+                    broken = ChainVerification.broken(checked, seq, "broken-link",
+                            "event 1 names " + namedPrevious + " as previous hash instead of the genesis value");
+                } else {
+                    // This event is intact (its hash holds) and was chained to a predecessor whose hash was
+                    // namedPrevious: the predecessor is no longer that event.
+                    broken = ChainVerification.broken(checked - 1, seq - 1, "broken-link",
+                            "event " + seq + " was chained to event " + (seq - 1) + " with hash " + namedPrevious
+                                    + ", but event " + (seq - 1) + " now hashes to " + previousHash
+                                    + ": it was rewritten and re-hashed");
+                }
+                return;
+            }
+            byte[] leaf = rs.getBytes(14);
+            byte[] expectedLeaf = MerkleTree.leafHash(canonical);
+            if (!Arrays.equals(leaf, expectedLeaf)) {
+                broken = ChainVerification.broken(checked, seq, "hash-mismatch", leaf == null
+                        ? "event " + seq + " has no Merkle leaf"
+                        : "event " + seq + " no longer matches the Merkle leaf recorded when it was appended ("
+                                + HEX.formatHex(leaf) + ", now " + HEX.formatHex(expectedLeaf) + ")");
+                return;
+            }
+            String column = disagreeingColumn(rs, event);
+            if (column != null) {
+                broken = ChainVerification.broken(checked, seq, "column-mismatch",
+                        "column " + column + " of event " + seq + " does not agree with its canonical text");
+                return;
+            }
             previousHash = hash;
             expectedSeq++;
             checked++;
         }
 
-        ChainVerification result() {
-            return broken != null ? broken : ChainVerification.ok(checked, previousHash);
+        ChainVerification result(long headSeq, String headHash) {
+            if (broken != null) {
+                return broken;
+            }
+            long last = expectedSeq - 1;
+            if (headSeq > last) {
+                return ChainVerification.broken(checked, last + 1, "missing-sequence",
+                        "the chain head records " + headSeq + " events but the stored events end at " + last);
+            }
+            if (headSeq == last && !headHash.equals(previousHash)) {
+                return ChainVerification.broken(checked - 1, last, "hash-mismatch",
+                        "the chain head records hash " + headHash + " for event " + last + ", which now hashes to "
+                                + previousHash);
+            }
+            if (headSeq < last) {
+                // head and events come from one snapshot, and every append moves the head: an event past the
+                // head was written around the ledger
+                return ChainVerification.broken(headSeq, headSeq + 1, "broken-link",
+                        "event " + (headSeq + 1) + " lies beyond the chain head, which records " + headSeq + " events");
+            }
+            return ChainVerification.ok(checked, previousHash);
         }
+    }
+
+    /** The first column that says something other than the canonical text, or null when all agree. */
+    private static String disagreeingColumn(ResultSet rs, JsonNode event) throws SQLException {
+        if (event.size() != CANONICAL_KEYS.length) {
+            return "canonical (it has other fields than the " + CANONICAL_KEYS.length + " of an event)";
+        }
+        for (String key : CANONICAL_KEYS) {
+            if (!event.has(key)) {
+                return "canonical (it lacks " + key + ")";
+            }
+        }
+        if (!rs.getString(2).equals(text(event.get("previousHash")))) {
+            return "previous_hash";
+        }
+        OffsetDateTime at = rs.getObject(5, OffsetDateTime.class);
+        if (!CanonicalEvent.TIME.format(at).equals(text(event.get("occurredAt")))) {
+            return "occurred_at";
+        }
+        String[][] plain = {{"actor", "actor"}, {"actor_role", "role"}, {"action", "action"},
+            {"entity_type", "entityType"}, {"entity_id", "entityId"}, {"reason", "reason"}};
+        for (int i = 0; i < plain.length; i++) {
+            String value = rs.getString(6 + i);
+            JsonNode node = event.get(plain[i][1]);
+            boolean same = value == null ? node.isNull() : node.isString() && value.equals(node.stringValue());
+            if (!same) {
+                return plain[i][0];
+            }
+        }
+        if (!sameJson(rs.getString(12), event.get("before"))) {
+            return "before_state";
+        }
+        if (!sameJson(rs.getString(13), event.get("after"))) {
+            return "after_state";
+        }
+        return null;
+    }
+
+    /** A {@code jsonb} column (SQL NULL for no value) against the canonical value (JSON null for none). */
+    private static boolean sameJson(String column, JsonNode canonical) {
+        if (column == null) {
+            return canonical.isNull();
+        }
+        try {
+            return JSON.readTree(column).equals(BY_VALUE, canonical);
+        } catch (JacksonException e) {
+            return false;
+        }
+    }
+
+    private static String text(JsonNode node) {
+        return node == null || node.isNull() ? null : node.isString() ? node.stringValue() : node.toString();
     }
 }
