@@ -6,7 +6,13 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.OffsetDateTime;
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.Comparator;
 import java.util.HexFormat;
 import javax.sql.DataSource;
@@ -41,6 +47,9 @@ import tools.jackson.databind.json.JsonMapper;
 public class ChainVerifier {
 
     private static final int FETCH_SIZE = 1000;
+    /** Below this many events one walk is quick enough; above it the chain is cut into parts checked at once. */
+    static final long PARALLEL_FROM = 20_000;
+    private static final int MAX_PARTS = 4;
     private static final HexFormat HEX = HexFormat.of();
     private static final String[] CANONICAL_KEYS = {"action", "actor", "after", "before", "entityId", "entityType",
         "occurredAt", "previousHash", "reason", "role", "seq"};
@@ -59,10 +68,19 @@ public class ChainVerifier {
     };
 
     private final DataSource dataSource;
+    private final long parallelFrom;
+    private final int parts;
 
     @Autowired
     ChainVerifier(DataSource dataSource) {
+        this(dataSource, PARALLEL_FROM, Math.max(1, Math.min(MAX_PARTS, Runtime.getRuntime().availableProcessors())));
+    }
+
+    /** @param parts how many ranges a chain of at least {@code parallelFrom} events is cut into */
+    ChainVerifier(DataSource dataSource, long parallelFrom, int parts) {
         this.dataSource = dataSource;
+        this.parallelFrom = parallelFrom;
+        this.parts = parts;
     }
 
     /** A verifier over any database holding the ledger tables, for use outside the service. */
@@ -70,63 +88,227 @@ public class ChainVerifier {
         return new ChainVerifier(dataSource);
     }
 
-    /** Walks the whole chain in one read-only, repeatable-read snapshot. */
+    /**
+     * Walks the whole chain in one read-only, repeatable-read snapshot. A long chain is cut into
+     * consecutive ranges checked at the same time on separate connections that share the snapshot
+     * ({@code pg_export_snapshot}), so the database and the hashing run on every core; the ranges'
+     * results are then joined in order, with the link across each cut checked, so the answer is the
+     * one a single walk would give.
+     */
     public ChainVerification verify() {
-        try (Connection c = dataSource.getConnection()) {
-            boolean autoCommit = c.getAutoCommit();
-            c.setAutoCommit(false);
-            try {
-                c.setTransactionIsolation(Connection.TRANSACTION_REPEATABLE_READ);
-                c.setReadOnly(true);
-                return walk(c);
-            } finally {
-                c.rollback();
-                c.setReadOnly(false);
-                c.setTransactionIsolation(Connection.TRANSACTION_READ_COMMITTED);
-                c.setAutoCommit(autoCommit);
+        List<Connection> opened = new ArrayList<>();
+        ExecutorService pool = null;
+        try {
+            Connection first = begin(opened, null);
+            long headSeq;
+            String headHash;
+            try (Statement s = first.createStatement();
+                    ResultSet rs = s.executeQuery("SELECT last_seq, last_hash FROM audit_chain_head WHERE id = 1")) {
+                rs.next();
+                headSeq = rs.getLong(1);
+                headHash = rs.getString(2);
             }
+            int parts = headSeq >= parallelFrom ? (int) Math.max(1, Math.min(this.parts, headSeq)) : 1;
+            List<Range> ranges = new ArrayList<>();
+            for (int i = 0; i < parts; i++) {
+                long lo = 1 + headSeq * i / parts;
+                long hi = i == parts - 1 ? Long.MAX_VALUE : headSeq * (i + 1) / parts;
+                ranges.add(new Range(lo, hi));
+            }
+            List<Future<Range>> running = new ArrayList<>();
+            if (parts > 1) {
+                String snapshot;
+                try (Statement s = first.createStatement(); ResultSet rs = s.executeQuery("SELECT pg_export_snapshot()")) {
+                    rs.next();
+                    snapshot = rs.getString(1);
+                }
+                pool = Executors.newFixedThreadPool(parts - 1, r -> {
+                    Thread t = new Thread(r, "ledger-verify");
+                    t.setDaemon(true);
+                    return t;
+                });
+                for (Range range : ranges.subList(1, parts)) {
+                    Connection c = begin(opened, snapshot);
+                    running.add(pool.submit(() -> range.walk(c)));
+                }
+            }
+            ranges.get(0).walk(first);
+            for (Future<Range> f : running) {
+                f.get();
+            }
+            return join(ranges, headSeq, headHash);
         } catch (SQLException e) {
             throw new DataAccessResourceFailureException("could not read the ledger to verify it", e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("ledger verification interrupted", e);
+        } catch (ExecutionException e) {
+            throw new DataAccessResourceFailureException("could not read the ledger to verify it", e.getCause());
+        } finally {
+            if (pool != null) {
+                pool.shutdownNow();
+            }
+            for (Connection c : opened) {
+                end(c);
+            }
         }
     }
 
-    private static ChainVerification walk(Connection c) throws SQLException {
-        long headSeq;
-        String headHash;
-        try (Statement s = c.createStatement();
-                ResultSet rs = s.executeQuery("SELECT last_seq, last_hash FROM audit_chain_head WHERE id = 1")) {
-            rs.next();
-            headSeq = rs.getLong(1);
-            headHash = rs.getString(2);
+    /** Opens a read-only repeatable-read transaction, on the exported snapshot when one is given. */
+    private Connection begin(List<Connection> opened, String snapshot) throws SQLException {
+        Connection c = dataSource.getConnection();
+        opened.add(c);
+        c.setAutoCommit(false);
+        c.setTransactionIsolation(Connection.TRANSACTION_REPEATABLE_READ);
+        c.setReadOnly(true);
+        try (Statement s = c.createStatement()) {
+            if (snapshot != null) {
+                s.execute("SET TRANSACTION SNAPSHOT '" + snapshot.replace("'", "") + "'");
+            }
+            // one long scan: compiling it to machine code costs more than it saves
+            s.execute("SET LOCAL jit = off");
         }
-        Walk walk = new Walk();
-        try (PreparedStatement ps = c.prepareStatement("""
-                SELECT e.seq, e.previous_hash, e.hash, e.canonical, e.occurred_at, e.actor, e.actor_role, e.action,
-                       e.entity_type, e.entity_id, e.reason, e.before_state::text, e.after_state::text,
-                       (SELECT n.hash FROM ledger_tree_node n WHERE n.level = 0 AND n.position = e.seq - 1)
-                  FROM audit_event e
-                 ORDER BY e.seq""")) {
-            ps.setFetchSize(FETCH_SIZE);
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next() && walk.broken == null) {
-                    walk.row(rs);
-                }
+        return c;
+    }
+
+    private static void end(Connection c) {
+        try {
+            c.rollback();
+            c.setReadOnly(false);
+            c.setTransactionIsolation(Connection.TRANSACTION_READ_COMMITTED);
+            c.setAutoCommit(true);
+        } catch (SQLException ignored) {
+            // the connection is closed next either way
+        } finally {
+            try {
+                c.close();
+            } catch (SQLException ignored) {
+                // nothing more to release
             }
         }
-        return walk.result(headSeq, headHash);
+    }
+
+    /** The ranges' findings in chain order, as one walk from event 1 to the head would report them. */
+    private static ChainVerification join(List<Range> ranges, long headSeq, String headHash) {
+        long checked = 0;
+        String previousHash = CanonicalEvent.GENESIS_HASH;
+        long last = 0;
+        for (int i = 0; i < ranges.size(); i++) {
+            Range r = ranges.get(i);
+            if (r.lo > 1 && r.firstNamedPrevious != null && !r.firstNamedPrevious.equals(previousHash)) {
+                return ChainVerification.broken(checked - 1, r.lo - 1, "broken-link", Walk.rehashed(r.lo,
+                        r.firstNamedPrevious, previousHash));
+            }
+            if (r.broken != null) {
+                ChainVerification b = r.broken;
+                return ChainVerification.broken(checked + b.eventsChecked(), b.firstBrokenSeq(), b.problem(),
+                        b.detail());
+            }
+            if (r.checked > 0) {
+                previousHash = r.lastHash;
+                last = r.lo + r.checked - 1;
+            }
+            checked += r.checked;
+            if (r.hi != Long.MAX_VALUE && r.checked < r.hi - r.lo + 1) {
+                // this range lost events at its end: the gap runs on to the next stored event, if any
+                Long next = ranges.subList(i + 1, ranges.size()).stream().map(x -> x.firstSeq)
+                        .filter(java.util.Objects::nonNull).findFirst().orElse(null);
+                if (next != null) {
+                    return ChainVerification.broken(checked, last + 1, "missing-sequence",
+                            "expected event " + (last + 1) + " but the next stored event is " + next);
+                }
+                break;
+            }
+        }
+        if (headSeq > last) {
+            return ChainVerification.broken(checked, last + 1, "missing-sequence",
+                    "the chain head records " + headSeq + " events but the stored events end at " + last);
+        }
+        if (headSeq < last) {
+            // head and events come from one snapshot, and every append moves the head: an event past the head
+            // was written around the ledger
+            return ChainVerification.broken(headSeq, headSeq + 1, "broken-link",
+                    "event " + (headSeq + 1) + " lies beyond the chain head, which records " + headSeq + " events");
+        }
+        if (!headHash.equals(previousHash)) {
+            return ChainVerification.broken(checked - 1, last, "hash-mismatch",
+                    "the chain head records hash " + headHash + " for event " + last + ", which now hashes to "
+                            + previousHash);
+        }
+        return ChainVerification.ok(checked, previousHash);
+    }
+
+    /** Consecutive events [lo, hi] and what walking them found. */
+    private static final class Range {
+        final long lo;
+        final long hi;
+        long checked;
+        String lastHash;
+        /** What the range's first event names as its predecessor's hash; checked against the range before. */
+        String firstNamedPrevious;
+        /** Sequence number of the first stored row in the range, null when it has none. */
+        Long firstSeq;
+        ChainVerification broken;
+
+        Range(long lo, long hi) {
+            this.lo = lo;
+            this.hi = hi;
+        }
+
+        Range walk(Connection c) throws SQLException {
+            Walk walk = new Walk(lo);
+            try (PreparedStatement ps = c.prepareStatement("""
+                    SELECT e.seq, e.previous_hash, e.hash, e.canonical, e.occurred_at, e.actor, e.actor_role, e.action,
+                           e.entity_type, e.entity_id, e.reason, e.before_state::text, e.after_state::text,
+                           (SELECT n.hash FROM ledger_tree_node n WHERE n.level = 0 AND n.position = e.seq - 1)
+                      FROM audit_event e
+                     WHERE e.seq BETWEEN ? AND ?
+                     ORDER BY e.seq""")) {
+                ps.setLong(1, lo);
+                ps.setLong(2, hi);
+                ps.setFetchSize(FETCH_SIZE);
+                try (ResultSet rs = ps.executeQuery()) {
+                    while (rs.next() && walk.broken == null) {
+                        walk.row(rs);
+                    }
+                }
+            }
+            checked = walk.checked;
+            lastHash = walk.previousHash;
+            firstNamedPrevious = walk.firstNamedPrevious;
+            firstSeq = walk.firstSeq;
+            broken = walk.broken;
+            return this;
+        }
     }
 
     /** Checks each row against the one before it; stops at the first break. */
     private static final class Walk {
-        private long expectedSeq = 1;
-        private String previousHash = CanonicalEvent.GENESIS_HASH;
+        private long expectedSeq;
+        /** Null at the start of a range after the first: the range before vouches for it, see {@link #join}. */
+        private String previousHash;
+        private String firstNamedPrevious;
+        private Long firstSeq;
         private long checked;
         private ChainVerification broken;
+
+        Walk(long firstSeq) {
+            this.expectedSeq = firstSeq;
+            this.previousHash = firstSeq == 1 ? CanonicalEvent.GENESIS_HASH : null;
+        }
+
+        static String rehashed(long seq, String namedPrevious, String actualPrevious) {
+            return "event " + seq + " was chained to event " + (seq - 1) + " with hash " + namedPrevious
+                    + ", but event " + (seq - 1) + " now hashes to " + actualPrevious + ": it was rewritten and re-hashed";
+        }
 
         void row(ResultSet rs) throws SQLException {
             long seq = rs.getLong(1);
             String hash = rs.getString(3);
             String canonical = rs.getString(4);
+            if (firstSeq == null) {
+                firstSeq = seq;
+            }
             if (seq != expectedSeq) {
                 broken = ChainVerification.broken(checked, expectedSeq, "missing-sequence",
                         "expected event " + expectedSeq + " but the next stored event is " + seq);
@@ -152,7 +334,9 @@ public class ChainVerifier {
                 return;
             }
             String namedPrevious = text(event.get("previousHash"));
-            if (!previousHash.equals(namedPrevious)) {
+            if (previousHash == null) {
+                firstNamedPrevious = namedPrevious;
+            } else if (!previousHash.equals(namedPrevious)) {
                 if (seq == 1) {
                     broken = ChainVerification.broken(checked, seq, "broken-link",
                             "event 1 names " + namedPrevious + " as previous hash instead of the genesis value");
@@ -160,9 +344,7 @@ public class ChainVerifier {
                     // This event is intact (its hash holds) and was chained to a predecessor whose hash was
                     // namedPrevious: the predecessor is no longer that event.
                     broken = ChainVerification.broken(checked - 1, seq - 1, "broken-link",
-                            "event " + seq + " was chained to event " + (seq - 1) + " with hash " + namedPrevious
-                                    + ", but event " + (seq - 1) + " now hashes to " + previousHash
-                                    + ": it was rewritten and re-hashed");
+                            rehashed(seq, namedPrevious, previousHash));
                 }
                 return;
             }
@@ -184,29 +366,6 @@ public class ChainVerifier {
             previousHash = hash;
             expectedSeq++;
             checked++;
-        }
-
-        ChainVerification result(long headSeq, String headHash) {
-            if (broken != null) {
-                return broken;
-            }
-            long last = expectedSeq - 1;
-            if (headSeq > last) {
-                return ChainVerification.broken(checked, last + 1, "missing-sequence",
-                        "the chain head records " + headSeq + " events but the stored events end at " + last);
-            }
-            if (headSeq == last && !headHash.equals(previousHash)) {
-                return ChainVerification.broken(checked - 1, last, "hash-mismatch",
-                        "the chain head records hash " + headHash + " for event " + last + ", which now hashes to "
-                                + previousHash);
-            }
-            if (headSeq < last) {
-                // head and events come from one snapshot, and every append moves the head: an event past the
-                // head was written around the ledger
-                return ChainVerification.broken(headSeq, headSeq + 1, "broken-link",
-                        "event " + (headSeq + 1) + " lies beyond the chain head, which records " + headSeq + " events");
-            }
-            return ChainVerification.ok(checked, previousHash);
         }
     }
 
