@@ -257,19 +257,28 @@ public class ChainVerifier {
 
         Range walk(Connection c) throws SQLException {
             Walk walk = new Walk(lo);
+            // Leaves come from a second cursor on the same transaction, read alongside in position order: a
+            // merge of two index scans, cheaper for the server than one index look-up per event.
             try (PreparedStatement ps = c.prepareStatement("""
                     SELECT e.seq, e.previous_hash, e.hash, e.canonical, e.occurred_at, e.actor, e.actor_role, e.action,
-                           e.entity_type, e.entity_id, e.reason, e.before_state::text, e.after_state::text,
-                           (SELECT n.hash FROM ledger_tree_node n WHERE n.level = 0 AND n.position = e.seq - 1)
+                           e.entity_type, e.entity_id, e.reason, e.before_state::text, e.after_state::text
                       FROM audit_event e
                      WHERE e.seq BETWEEN ? AND ?
-                     ORDER BY e.seq""")) {
+                     ORDER BY e.seq""");
+                    PreparedStatement leaves = c.prepareStatement("""
+                    SELECT position, hash FROM ledger_tree_node
+                     WHERE level = 0 AND position BETWEEN ? AND ?
+                     ORDER BY position""")) {
                 ps.setLong(1, lo);
                 ps.setLong(2, hi);
                 ps.setFetchSize(FETCH_SIZE);
-                try (ResultSet rs = ps.executeQuery()) {
+                leaves.setLong(1, lo - 1);
+                leaves.setLong(2, hi == Long.MAX_VALUE ? hi : hi - 1);
+                leaves.setFetchSize(FETCH_SIZE * 4);
+                try (ResultSet rs = ps.executeQuery(); ResultSet leafRows = leaves.executeQuery()) {
+                    Leaves leafCursor = new Leaves(leafRows);
                     while (rs.next() && walk.broken == null) {
-                        walk.row(rs);
+                        walk.row(rs, leafCursor);
                     }
                 }
             }
@@ -279,6 +288,31 @@ public class ChainVerifier {
             firstSeq = walk.firstSeq;
             broken = walk.broken;
             return this;
+        }
+    }
+
+    /** The stored leaves in position order, looked up with non-decreasing positions. */
+    private static final class Leaves {
+        private final ResultSet rows;
+        private long position = -1;
+        private byte[] hash;
+        private boolean done;
+
+        Leaves(ResultSet rows) {
+            this.rows = rows;
+        }
+
+        /** The leaf at {@code wanted}, or null when none is stored there. */
+        byte[] at(long wanted) throws SQLException {
+            while (!done && position < wanted) {
+                if (rows.next()) {
+                    position = rows.getLong(1);
+                    hash = rows.getBytes(2);
+                } else {
+                    done = true;
+                }
+            }
+            return !done && position == wanted ? hash : null;
         }
     }
 
@@ -302,7 +336,7 @@ public class ChainVerifier {
                     + ", but event " + (seq - 1) + " now hashes to " + actualPrevious + ": it was rewritten and re-hashed";
         }
 
-        void row(ResultSet rs) throws SQLException {
+        void row(ResultSet rs, Leaves leaves) throws SQLException {
             long seq = rs.getLong(1);
             String hash = rs.getString(3);
             String canonical = rs.getString(4);
@@ -348,7 +382,7 @@ public class ChainVerifier {
                 }
                 return;
             }
-            byte[] leaf = rs.getBytes(14);
+            byte[] leaf = leaves.at(seq - 1);
             byte[] expectedLeaf = MerkleTree.leafHash(canonical);
             if (!Arrays.equals(leaf, expectedLeaf)) {
                 broken = ChainVerification.broken(checked, seq, "hash-mismatch", leaf == null
