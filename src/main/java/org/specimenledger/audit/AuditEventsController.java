@@ -3,7 +3,9 @@ package org.specimenledger.audit;
 import io.swagger.v3.oas.annotations.Operation;
 import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
+import java.time.Instant;
 import java.util.List;
+import org.specimenledger.shared.RuleViolation;
 import org.springframework.security.access.prepost.PreAuthorize;
 import org.springframework.validation.annotation.Validated;
 import org.springframework.web.bind.annotation.GetMapping;
@@ -25,15 +27,26 @@ class AuditEventsController {
         this.verifier = verifier;
     }
 
-    /** A page of events in chain order, after sequence number {@code after}. */
+    /**
+     * A page of events in chain order, after sequence number {@code after}, optionally only those of one
+     * record, actor or action, or with {@code from ≤ occurredAt < to} (ISO-8601 instants).
+     */
     @GetMapping("/events")
     @PreAuthorize(AuditAccess.READERS)
-    @Operation(summary = "List ledger events in chain order, optionally for one record")
+    @Operation(summary = "Search ledger events in chain order by record, actor, action and time")
     EventPage events(@RequestParam(defaultValue = "0") @Min(0) long after,
             @RequestParam(defaultValue = "100") @Min(1) @Max(1000) int limit,
             @RequestParam(required = false) String entityType,
-            @RequestParam(required = false) String entityId) {
-        List<LedgerEvent> events = queries.page(after, limit, entityType, entityId);
+            @RequestParam(required = false) String entityId,
+            @RequestParam(required = false) String actor,
+            @RequestParam(required = false) String action,
+            @RequestParam(required = false) Instant from,
+            @RequestParam(required = false) Instant to) {
+        if (from != null && to != null && !to.isAfter(from)) {
+            throw new RuleViolation("to", "to (" + to + ") must be after from (" + from + ")");
+        }
+        List<LedgerEvent> events = queries.search(
+                new LedgerQueries.EventFilter(entityType, entityId, actor, action, from, to), after, limit);
         Long next = events.size() == limit ? events.get(events.size() - 1).seq() : null;
         return new EventPage(events, next);
     }

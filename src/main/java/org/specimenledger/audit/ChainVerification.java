@@ -5,7 +5,9 @@ package org.specimenledger.audit;
  * that does not verify and why.
  *
  * @param firstBrokenSeq null when valid
- * @param problem        {@code hash-mismatch}, {@code broken-link} or {@code missing-sequence}; null when valid
+ * @param problem        {@code hash-mismatch}, {@code broken-link}, {@code missing-sequence} or
+ *                       {@code column-mismatch} (see {@link ChainVerifier}); null when valid
+ * @param detail         what was found, naming the column for a column mismatch
  */
 public record ChainVerification(boolean valid, long eventsChecked, String headHash, Long firstBrokenSeq,
         String problem, String detail) {

@@ -19,7 +19,8 @@ import org.springframework.transaction.annotation.Transactional;
  * <p>The chain stays linear under concurrent writers because each append first locks the single
  * chain-head row; the next writer waits until this transaction ends and then sees the new head. So
  * sequence numbers have no gaps (no database sequence is used: a rolled-back transaction would burn a
- * number).
+ * number). The same lock orders the event's leaf in the Merkle tree ({@link LedgerTree}), appended in the
+ * same transaction.
  */
 @Service
 public class Ledger {
@@ -29,10 +30,12 @@ public class Ledger {
 
     private final JdbcClient jdbc;
     private final Clock clock;
+    private final LedgerTree tree;
 
-    Ledger(JdbcClient jdbc, Clock clock) {
+    Ledger(JdbcClient jdbc, Clock clock, LedgerTree tree) {
         this.jdbc = jdbc;
         this.clock = clock;
+        this.tree = tree;
     }
 
     /**
@@ -78,6 +81,8 @@ public class Ledger {
                         canonical)
                 .update();
         jdbc.sql("UPDATE audit_chain_head SET last_seq = ?, last_hash = ? WHERE id = 1").params(seq, hash).update();
+        // still under the chain-head lock, so leaves are appended in sequence order
+        tree.append(seq, canonical);
         return new LedgerEvent(seq, at, actor, role, action, entityType, id, reason, null, null, head.lastHash(),
                 hash, canonical);
     }

@@ -1,5 +1,6 @@
 package org.specimenledger.audit;
 
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import org.springframework.jdbc.core.simple.JdbcClient;
@@ -21,6 +22,15 @@ public class LedgerQueries {
 
     @Transactional(readOnly = true)
     public List<LedgerEvent> page(long afterSeq, int limit, String entityType, String entityId) {
+        return search(new EventFilter(entityType, entityId, null, null, null, null), afterSeq, limit);
+    }
+
+    /**
+     * Events matching every given criterion, in chain order, after sequence number {@code afterSeq}.
+     * Time runs from {@code from} (inclusive) to {@code to} (exclusive).
+     */
+    @Transactional(readOnly = true)
+    public List<LedgerEvent> search(EventFilter filter, long afterSeq, int limit) {
         StringBuilder sql = new StringBuilder("""
                 SELECT seq, occurred_at, actor, actor_role, action, entity_type, entity_id, reason,
                        before_state::text AS before_state, after_state::text AS after_state,
@@ -28,13 +38,17 @@ public class LedgerQueries {
                   FROM audit_event WHERE seq > ?""");
         List<Object> params = new ArrayList<>();
         params.add(afterSeq);
-        if (entityType != null && !entityType.isBlank()) {
-            sql.append(" AND entity_type = ?");
-            params.add(entityType);
+        where(sql, params, "entity_type = ?", filter.entityType());
+        where(sql, params, "entity_id = ?", filter.entityId());
+        where(sql, params, "actor = ?", filter.actor());
+        where(sql, params, "action = ?", filter.action());
+        if (filter.from() != null) {
+            sql.append(" AND occurred_at >= ?");
+            params.add(java.sql.Timestamp.from(filter.from()));
         }
-        if (entityId != null && !entityId.isBlank()) {
-            sql.append(" AND entity_id = ?");
-            params.add(entityId);
+        if (filter.to() != null) {
+            sql.append(" AND occurred_at < ?");
+            params.add(java.sql.Timestamp.from(filter.to()));
         }
         sql.append(" ORDER BY seq LIMIT ?");
         params.add(limit);
@@ -58,6 +72,18 @@ public class LedgerQueries {
     @Transactional(readOnly = true)
     public long count() {
         return jdbc.sql("SELECT count(*) FROM audit_event").query(Long.class).single();
+    }
+
+    private static void where(StringBuilder sql, List<Object> params, String condition, String value) {
+        if (value != null && !value.isBlank()) {
+            sql.append(" AND ").append(condition);
+            params.add(value);
+        }
+    }
+
+    /** What to search for; null or blank fields are not criteria. */
+    public record EventFilter(String entityType, String entityId, String actor, String action, Instant from,
+            Instant to) {
     }
 
     private JsonNode node(String text) {

@@ -22,7 +22,8 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The API is stateless HTTP Basic with CSRF off (no cookies, so nothing for CSRF to ride on); each
- * endpoint declares its roles with {@code @PreAuthorize}. Anonymous callers reach only health.
+ * endpoint declares its roles with {@code @PreAuthorize}. Anonymous callers reach only health and the
+ * ledger's public key and latest checkpoint.
  * Authentication and authorisation failures are problem responses too.
  */
 @Configuration(proxyBeanMethods = false)
@@ -59,6 +60,8 @@ class SecurityConfiguration {
                                         "your role may not do this", false)))
                 .authorizeHttpRequests(auth -> auth
                         .requestMatchers("/actuator/health", "/actuator/health/**", "/error").permitAll()
+                        // the ledger's public key and latest signed checkpoint, for copies held outside the lab
+                        .requestMatchers("/api/v1/ledger/key", "/api/v1/ledger/checkpoints/latest").permitAll()
                         .anyRequest().authenticated());
         return http.build();
     }
