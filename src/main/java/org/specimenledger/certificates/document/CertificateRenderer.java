@@ -2,7 +2,6 @@ package org.specimenledger.certificates.document;
 
 import java.awt.Font;
 import java.awt.FontFormatException;
-import java.awt.Image;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
@@ -62,7 +61,6 @@ public final class CertificateRenderer {
     private final JasperReport main;
     private final Map<String, JasperReport> subreports;
     private final PrintableText printable;
-    private final CurveChart chart = new CurveChart(515, 300, 2.0);
 
     /** Compiles the templates; fails with {@link IllegalStateException} when one is missing or invalid. */
     public CertificateRenderer() {
@@ -161,7 +159,7 @@ public final class CertificateRenderer {
                 "calibrationReference", e.calibrationReference(), "calibratedOn", DATE.format(e.calibratedOn()),
                 "dueOn", DATE.format(e.dueOn()), "accuracyClass", e.accuracyClass()}));
         p.put("APPENDIX", rows(d.appendix(), a -> new Object[] {"specimen", a.specimen(),
-                "chart", chart.draw(a.curve())}));
+                "chart", new CurveVectorRenderer(a.curve())}));
         for (String name : SUBREPORTS) {
             p.put(name + "_REPORT", subreports.get(name));
         }
@@ -179,7 +177,7 @@ public final class CertificateRenderer {
             Map<String, Object> row = new LinkedHashMap<>();
             for (int i = 0; i < pairs.length; i += 2) {
                 Object value = pairs[i + 1];
-                row.put((String) pairs[i], value instanceof Image ? value : printable.of((String) value));
+                row.put((String) pairs[i], value instanceof String s ? printable.of(s) : value );
             }
             rows.add(row);
         }

@@ -4,10 +4,7 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.FontFormatException;
-import java.awt.Graphics2D;
-import java.awt.RenderingHints;
 import java.awt.geom.Ellipse2D;
-import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -16,32 +13,26 @@ import org.jfree.chart.annotations.XYPointerAnnotation;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
 /**
- * Draws a {@link StressStrainCurve} with JFreeChart into an opaque RGB raster image (no alpha, so
- * the PDF carries no transparency). Labels use the DejaVu Sans file shipped with the report fonts, so
- * the picture does not depend on the fonts installed on the host. Thread-safe: each call builds its
- * own chart.
+ * Builds the JFreeChart chart of a {@link StressStrainCurve}: the measured curve, the elastic and
+ * offset lines dashed, and the determined points marked and labelled. Labels use the DejaVu Sans file
+ * shipped with the report fonts, so the picture does not depend on the fonts installed on the host.
+ * Thread-safe: each call builds its own chart.
  */
 final class CurveChart {
 
     private static final String FONT_FILE = "net/sf/jasperreports/fonts/dejavu/DejaVuSans.ttf";
     private static final Font BASE_FONT = loadFont();
 
-    private final int widthPx;
-    private final int heightPx;
-    private final double scale;
-
-    /** A chart of {@code widthPt} × {@code heightPt} points, rasterised at {@code scale} pixels per point. */
-    CurveChart(int widthPt, int heightPt, double scale) {
-        this.widthPx = (int) Math.round(widthPt * scale);
-        this.heightPx = (int) Math.round(heightPt * scale);
-        this.scale = scale;
+    private CurveChart() {
     }
 
-    BufferedImage draw(StressStrainCurve curve) {
+    /** The chart for {@code curve} with fonts and strokes sized for {@code scale} device units per point. */
+    static JFreeChart chart(StressStrainCurve curve, double scale) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYSeries measured = new XYSeries("measured", false, true);
         double[] strain = curve.strainPercent();
@@ -89,29 +80,20 @@ final class CurveChart {
         plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
         for (StressStrainCurve.MarkedPoint p : curve.points()) {
             XYPointerAnnotation note = new XYPointerAnnotation(p.label(), p.strainPercent(), p.stressMpa(),
-                    -Math.PI / 4);
+                    -Math.PI / 2);
             note.setFont(label);
-            note.setArrowLength(12 * scale);
-            note.setBaseRadius(4 * scale);
-            note.setTipRadius(3 * scale);
+            note.setTextAnchor(TextAnchor.BOTTOM_CENTER);
+            note.setArrowLength(14 * scale);
+            note.setArrowWidth(2 * scale);
+            note.setBaseRadius(18 * scale);
+            note.setTipRadius(4 * scale);
             plot.addAnnotation(note);
         }
         JFreeChart chart = new JFreeChart(null, label, plot, true);
         chart.getLegend().setItemFont(label);
         chart.setBackgroundPaint(Color.WHITE);
         chart.setAntiAlias(true);
-
-        BufferedImage image = new BufferedImage(widthPx, heightPx, BufferedImage.TYPE_INT_RGB);
-        Graphics2D g = image.createGraphics();
-        try {
-            g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-            g.setColor(Color.WHITE);
-            g.fillRect(0, 0, widthPx, heightPx);
-            chart.draw(g, new java.awt.geom.Rectangle2D.Double(0, 0, widthPx, heightPx));
-        } finally {
-            g.dispose();
-        }
-        return image;
+        return chart;
     }
 
     private static Font loadFont() {

@@ -71,7 +71,10 @@ class CertificateRendererTest {
                 "Dr. Ada Invented", "Head of mechanical testing", "reviewed and approved for release",
                 "7KQ2-M9XD-4TRB", "/verify/7KQ2-M9XD-4TRB", "sequence 10482",
                 "9f2c1a7e5b3d4c6a8e0f1b2d3c4e5f60718293a4b5c6d7e8f90a1b2c3d4e5f6a",
-                "Stress–strain curve, specimen", "End of certificate");
+                "Stress–strain curve, specimen", "End of certificate",
+                // every table header in full
+                "Nominal thickness", "Product form", "Orientation", "Dimensions", "Reported value", "Requirement",
+                "Verdict", "Flags", "Calibration reference", "Calibrated on", "Due on");
         assertThat(text).doesNotContain("Replaces", "Status:");
     }
 
