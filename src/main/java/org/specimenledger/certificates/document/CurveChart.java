@@ -59,6 +59,9 @@ final class CurveChart {
             axis.setTickLabelFont(label);
             axis.setAutoRangeIncludesZero(true);
         }
+        // room for the point labels above the highest point and left of the elastic line
+        y.setUpperMargin(0.15);
+        x.setLowerMargin(0.04);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         int marksIndex = data.getSeriesCount() - 1;
         renderer.setSeriesPaint(0, new Color(0x1f, 0x3a, 0x5f));
