@@ -4,6 +4,8 @@ import jakarta.persistence.CollectionTable;
 import jakarta.persistence.Column;
 import jakarta.persistence.ElementCollection;
 import jakarta.persistence.Entity;
+import jakarta.persistence.EnumType;
+import jakarta.persistence.Enumerated;
 import jakarta.persistence.FetchType;
 import jakarta.persistence.Id;
 import jakarta.persistence.JoinColumn;
@@ -15,6 +17,7 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.UUID;
+import org.specimenledger.analysis.units.ReportingUnits;
 
 /** A customer's purchase order for testing, with the requirements its material specification sets. */
 @Entity
@@ -41,6 +44,10 @@ class CustomerOrder {
     @OrderColumn(name = "position")
     private List<Requirement> requirements = new ArrayList<>();
 
+    @Enumerated(EnumType.STRING)
+    @Column(name = "reporting_units", nullable = false)
+    private ReportingUnits reportingUnits = ReportingUnits.SI;
+
     @Column(name = "created_at", nullable = false, updatable = false)
     private Instant createdAt;
 
@@ -51,15 +58,16 @@ class CustomerOrder {
     }
 
     CustomerOrder(UUID customerId, String purchaseOrder, String materialSpecification, LocalDate receivedOn,
-            List<Requirement> requirements, Instant createdAt) {
+            List<Requirement> requirements, ReportingUnits reportingUnits, Instant createdAt) {
         this.id = UUID.randomUUID();
         this.customerId = customerId;
         this.createdAt = createdAt;
-        revise(purchaseOrder, materialSpecification, receivedOn, requirements);
+        revise(purchaseOrder, materialSpecification, receivedOn, requirements, reportingUnits);
     }
 
     void revise(String purchaseOrder, String materialSpecification, LocalDate receivedOn,
-            List<Requirement> requirements) {
+            List<Requirement> requirements, ReportingUnits reportingUnits) {
+        this.reportingUnits = reportingUnits;
         this.purchaseOrder = purchaseOrder;
         this.materialSpecification = materialSpecification;
         this.receivedOn = receivedOn;
@@ -89,6 +97,10 @@ class CustomerOrder {
 
     List<Requirement> requirements() {
         return List.copyOf(requirements);
+    }
+
+    ReportingUnits reportingUnits() {
+        return reportingUnits;
     }
 
     Instant createdAt() {

@@ -78,7 +78,8 @@ public class CustomerService {
                     + "' already has an order with purchase order '" + po + "'");
         }
         CustomerOrder order = orders.saveAndFlush(new CustomerOrder(customer.id(), po,
-                request.materialSpecification().trim(), request.receivedOn(), requirements, clock.instant()));
+                request.materialSpecification().trim(), request.receivedOn(), requirements,
+                request.reportingUnitsOrDefault(), clock.instant()));
         OrderView view = OrderView.of(order);
         ledger.record("order.registered", "order", order.id(), request.reason(), null, view);
         return view;
@@ -95,7 +96,8 @@ public class CustomerService {
                     + po + "'");
         }
         OrderView before = OrderView.of(order);
-        order.revise(po, request.materialSpecification().trim(), request.receivedOn(), requirements);
+        order.revise(po, request.materialSpecification().trim(), request.receivedOn(), requirements,
+                request.reportingUnitsOrDefault());
         orders.saveAndFlush(order);
         OrderView after = OrderView.of(order);
         ledger.record("order.revised", "order", id, reason, before, after);

@@ -8,16 +8,17 @@ import org.specimenledger.shared.FieldIssue;
 import org.specimenledger.shared.RuleViolation;
 
 /**
- * Checks an order's requirements before they are stored: a known ISO 6892-1 property symbol, the unit
- * that property is reported in, at least one limit, and ranges that are not upside down. All problems
+ * Checks an order's requirements before they are stored: a known ISO 6892-1 property symbol, a unit
+ * that property may be written in (SI, or ASTM's customary ksi, lbf, kip; see {@link RequirementUnit}), at least one limit, and ranges that are not upside down. All problems
  * are reported at once.
  */
 final class RequirementRules {
 
     private static final Pattern STRENGTH = Pattern.compile("ReH|ReL|Rm|Rp\\d+(\\.\\d+)?|Rt\\d+(\\.\\d+)?");
     private static final Pattern PERCENT = Pattern.compile("A|Ag|Agt|At|Ae|Z|A\\d+(\\.\\d+)?mm");
-    private static final Set<String> MODULUS_UNITS = Set.of("MPa", "GPa");
-    private static final Set<String> FORCE_UNITS = Set.of("N", "kN");
+    private static final Set<String> STRENGTH_UNITS = Set.of("MPa", "ksi");
+    private static final Set<String> MODULUS_UNITS = Set.of("MPa", "GPa", "ksi");
+    private static final Set<String> FORCE_UNITS = Set.of("N", "kN", "lbf", "kip");
 
     private RequirementRules() {
     }
@@ -59,16 +60,16 @@ final class RequirementRules {
 
     private static String expectedUnit(String property) {
         if (STRENGTH.matcher(property).matches()) {
-            return "MPa";
+            return "MPa or ksi";
         }
         if (PERCENT.matcher(property).matches()) {
             return "%";
         }
         if (property.equals("E")) {
-            return "MPa or GPa";
+            return "MPa, GPa or ksi";
         }
         if (property.equals("Fm")) {
-            return "N or kN";
+            return "N, kN, lbf or kip";
         }
         if (property.equals("W")) {
             return "J";
@@ -82,6 +83,9 @@ final class RequirementRules {
         }
         if (property.equals("Fm")) {
             return FORCE_UNITS.contains(unit);
+        }
+        if (STRENGTH.matcher(property).matches()) {
+            return STRENGTH_UNITS.contains(unit);
         }
         return expectedUnit(property).equals(unit);
     }

@@ -44,6 +44,36 @@ class CustomersApiTest extends IntegrationTest {
     }
 
     @Test
+    void orderChoosesUsCustomaryReportingWithLimitsInKsi() {
+        String customer = manager().post("/api/v1/customers",
+                Map.of("name", "Prairie Span " + UUID.randomUUID(), "address", "Dock 9")).id();
+        Api.Response order = manager().post("/api/v1/customers/" + customer + "/orders", Map.of(
+                "purchaseOrder", "PO-US-1", "materialSpecification", "ASTM A572 Grade 50",
+                "reportingUnits", "SI_AND_US_CUSTOMARY",
+                "requirements", List.of(requirement("ReH", 50, null, "ksi"), requirement("Rm", 65, null, "ksi"),
+                        requirement("Fm", 20, null, "kip"))));
+        assertThat(order.status()).as(order.toString()).isEqualTo(201);
+        assertThat(order.json().get("reportingUnits").asText()).isEqualTo("SI_AND_US_CUSTOMARY");
+        assertThat(order.json().get("requirements").get(0).get("unit").asText()).isEqualTo("ksi");
+
+        Api.Response plain = manager().post("/api/v1/customers/" + customer + "/orders", Map.of(
+                "purchaseOrder", "PO-SI-1", "materialSpecification", "EN 10025-2 S355J2+N",
+                "requirements", List.of(requirement("ReH", 355, null, "MPa"))));
+        assertThat(plain.json().get("reportingUnits").asText()).as("SI when not chosen").isEqualTo("SI");
+
+        Api.Response wrong = manager().post("/api/v1/customers/" + customer + "/orders", Map.of(
+                "purchaseOrder", "PO-US-2", "materialSpecification", "spec", "reportingUnits", "IMPERIAL",
+                "requirements", List.of(requirement("ReH", 50, null, "ksi"))));
+        assertThat(wrong.status()).isEqualTo(400);
+        assertThat(wrong.body()).contains("reportingUnits");
+        Api.Response badUnit = manager().post("/api/v1/customers/" + customer + "/orders", Map.of(
+                "purchaseOrder", "PO-US-3", "materialSpecification", "spec",
+                "requirements", List.of(requirement("A", 20, null, "ksi"))));
+        assertThat(badUnit.status()).isEqualTo(422);
+        assertThat(badUnit.body()).contains("/requirements/0/unit");
+    }
+
+    @Test
     void requirementWithMinAboveMaxIsRefusedNamingTheField() {
         String customer = manager().post("/api/v1/customers",
                 Map.of("name", "Upside Down " + UUID.randomUUID(), "address", "x")).id();
