@@ -203,12 +203,12 @@ class CertificateStore {
 
     /** A page of certificates matching the filters (each null when not used), newest first. */
     List<Issued> search(Filter f, int offset, int limit) {
-        return jdbc.sql(ISSUED + WHERE + " ORDER BY issued_at DESC, number DESC, revision DESC OFFSET ? LIMIT ?")
+        return jdbc.sql(ISSUED + " " + WHERE + " ORDER BY issued_at DESC, number DESC, revision DESC OFFSET ? LIMIT ?")
                 .params(filterParams(f, offset, limit)).query(CertificateStore::issuedRow).list();
     }
 
     long count(Filter f) {
-        return jdbc.sql("SELECT count(*) FROM certificate c" + WHERE).params(filterParams(f)).query(Long.class)
+        return jdbc.sql("SELECT count(*) FROM certificate c " + WHERE).params(filterParams(f)).query(Long.class)
                 .single();
     }
 
