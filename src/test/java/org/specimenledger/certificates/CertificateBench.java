@@ -18,7 +18,7 @@ import org.specimenledger.testsupport.Api;
  * specimens each pulled once with a Ramberg–Osgood curve (E 200 GPa, σ0.2 = 300 MPa, n = 10, to 5 % strain), so
  * the analysis reports Rp0.2 ≈ 300 MPa and Rm ≈ 413 MPa (the stress at 5 % strain of that model).
  */
-final class CertificateBench {
+public final class CertificateBench {
 
     static final LocalDate TODAY = LocalDate.now(ZoneOffset.UTC);
 
@@ -29,10 +29,10 @@ final class CertificateBench {
     private final String extensometer;
 
     /** The records one certificate needs. */
-    record Order(String orderId, String heatId, List<String> specimenIds, List<String> marks) {
+    public record Order(String orderId, String heatId, List<String> specimenIds, List<String> marks) {
     }
 
-    CertificateBench(Api technician, Api manager) {
+    public CertificateBench(Api technician, Api manager) {
         this.technician = technician;
         this.manager = manager;
         transducer = create(manager, "/api/v1/equipment", Map.of("assetId", asset("LC"), "kind", "FORCE_TRANSDUCER",
@@ -49,7 +49,7 @@ final class CertificateBench {
     }
 
     /** A requirement body: property, min, max (either may be null), unit. */
-    static Map<String, Object> requirement(String property, String min, String max, String unit) {
+    public static Map<String, Object> requirement(String property, String min, String max, String unit) {
         Map<String, Object> r = new HashMap<>();
         r.put("property", property);
         r.put("min", min == null ? null : new BigDecimal(min));
@@ -59,7 +59,7 @@ final class CertificateBench {
     }
 
     /** An order of {@code customerId} with {@code requirements} and {@code count} tested specimens. */
-    Order order(String customerId, List<Map<String, Object>> requirements, int count) {
+    public Order order(String customerId, List<Map<String, Object>> requirements, int count) {
         String heat = SpecimenFixtures.registerHeat(technician);
         String order = create(manager, "/api/v1/customers/" + customerId + "/orders", Map.of(
                 "purchaseOrder", "PO-" + UUID.randomUUID(), "materialSpecification", "EN 10025-2 S355J2+N",
