@@ -41,6 +41,32 @@ class CertificateIssueApiTest extends CertificateTesting {
         assertThat(events.get(0).get("action").asString()).isEqualTo("certificate-draft.created");
     }
 
+    /**
+     * ILAC-G8:09/2019 [S for the rules, DOMAIN.md; clause numbers M]: the same reported results against limits
+     * just inside and just outside them. Rp0.2 is reported 300 MPa with U ≈ 2 MPa and Rm 412 MPa with U ≈ 2.4 MPa
+     * (the bench's model and the engine's uncertainty budget). Against Rp0.2 ≥ 299 (just inside) and Rm ≥ 413
+     * (just outside): simple acceptance on the reported value gives pass and fail; guard-banded acceptance (w = U)
+     * gives conditional pass and conditional fail, because both values lie within U of their limit.
+     */
+    @Test
+    void guardBandTurnsValuesNearALimitIntoConditionalVerdicts() {
+        CertificateBench.Order order = bench().order(customerId(), List.of(
+                CertificateBench.requirement("Rp0.2", "299", null, "MPa"),
+                CertificateBench.requirement("Rm", "413", null, "MPa")), 1);
+        JsonNode simple = draft(order, order.specimenIds(), "SIMPLE_ACCEPTANCE", false).get("lines");
+        JsonNode guarded = draft(order, order.specimenIds(), "GUARD_BANDED", false).get("lines");
+        assertThat(simple.get(0).get("reported").asString()).isEqualTo("300");
+        assertThat(simple.get(1).get("reported").asString()).isEqualTo("412");
+        // the premise of the guard-banded case: each value lies within U of its limit, on either side
+        assertThat(guarded.get(0).get("expandedUncertainty").asDouble()).isGreaterThan(1.0);
+        assertThat(guarded.get(1).get("expandedUncertainty").asDouble()).isGreaterThan(1.0);
+        assertThat(simple.get(0).get("verdict").asString()).isEqualTo("PASS");
+        assertThat(simple.get(1).get("verdict").asString()).isEqualTo("FAIL");
+        assertThat(guarded.get(0).get("verdict").asString()).isEqualTo("CONDITIONAL_PASS");
+        assertThat(guarded.get(1).get("verdict").asString()).isEqualTo("CONDITIONAL_FAIL");
+        assertThat(guarded.get(1).get("verdictReason").asString()).contains("guard band U =");
+    }
+
     @Test
     void changeOfADraftNeedsAReasonAndIsInTheLedger() {
         CertificateBench.Order order = bench().order(customerId(), passingRequirements(), 2);
