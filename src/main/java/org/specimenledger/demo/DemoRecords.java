@@ -26,11 +26,14 @@ class DemoRecords {
     private final CustomerService customers;
     private final AccountService accounts;
     private final DemoTestRuns testRuns;
+    private final DemoCertificates certificates;
 
-    DemoRecords(CustomerService customers, AccountService accounts, DemoTestRuns testRuns) {
+    DemoRecords(CustomerService customers, AccountService accounts, DemoTestRuns testRuns,
+            DemoCertificates certificates) {
         this.customers = customers;
         this.accounts = accounts;
         this.testRuns = testRuns;
+        this.certificates = certificates;
     }
 
     void seed() {
@@ -76,7 +79,8 @@ class DemoRecords {
         account("demo-customer", "Northgate quality office (demo)", Role.CUSTOMER, girders);
         account("demo-customer-2", "Alder Valley quality office (demo)", Role.CUSTOMER, extrusions);
 
-        testRuns.seed(new DemoTestRuns.Orders(s355, pins, aluminium, brackets, seals));
+        DemoTestRuns.Tested tested = testRuns.seed(new DemoTestRuns.Orders(s355, pins, aluminium, brackets, seals));
+        certificates.seed(new DemoTestRuns.Orders(s355, pins, aluminium, brackets, seals), tested);
     }
 
     private void account(String username, String name, Role role, UUID organisation) {

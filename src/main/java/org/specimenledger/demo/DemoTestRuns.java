@@ -65,7 +65,11 @@ class DemoTestRuns {
         this.intake = intake;
     }
 
-    void seed(Orders orders) {
+    /** The demo specimens that were pulled in tension, for the demo certificates. */
+    record Tested(UUID structuralSteel, UUID alloyPins, UUID aluminium, UUID castBrackets) {
+    }
+
+    Tested seed(Orders orders) {
         // the bench
         UUID bigCell = instrument("LC-01", InstrumentKind.FORCE_TRANSDUCER, "Load cell of the 250 kN frame",
                 List.of(range("10000"), range("100000"), range("250000")), null, null, null);
@@ -147,6 +151,7 @@ class DemoTestRuns {
                 ControlMethod.A1, TestMode.TENSILE, null), DemoCurves.brittleCast(area(cast), le(cast), cast.labIdentifier()));
         upload(run(strip, smallFrame, smallCell, "500", longTravel, at(26, 13, 45), "23.0", TestStandard.ISO_37,
                 null, TestMode.CYCLIC, null), DemoCurves.elastomerCycles(area(strip), le(strip), strip.labIdentifier()));
+        return new Tested(flat.id(), round.id(), tube.id(), cast.id());
     }
 
     private UUID run(SpecimenView s, UUID machine, UUID cell, String rangeN, UUID extensometer, OffsetDateTime at,

@@ -23,7 +23,7 @@ import tools.jackson.databind.json.JsonMapper;
 /**
  * The API is stateless HTTP Basic with CSRF off (no cookies, so nothing for CSRF to ride on); each
  * endpoint declares its roles with {@code @PreAuthorize}. Anonymous callers reach only health and the
- * ledger's public key and latest checkpoint.
+ * ledger's public key and latest checkpoint, and certificate verification (rate-limited in its controller).
  * Authentication and authorisation failures are problem responses too.
  */
 @Configuration(proxyBeanMethods = false)
@@ -62,6 +62,8 @@ class SecurityConfiguration {
                         .requestMatchers("/actuator/health", "/actuator/health/**", "/error").permitAll()
                         // the ledger's public key and latest signed checkpoint, for copies held outside the lab
                         .requestMatchers("/api/v1/ledger/key", "/api/v1/ledger/checkpoints/latest").permitAll()
+                        // certificate verification from the printed code or a PDF file (rate-limited)
+                        .requestMatchers("/verify", "/verify/*").permitAll()
                         .anyRequest().authenticated());
         return http.build();
     }

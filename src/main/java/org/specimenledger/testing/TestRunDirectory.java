@@ -2,6 +2,7 @@ package org.specimenledger.testing;
 
 import java.util.List;
 import java.util.Optional;
+import org.specimenledger.curve.RawCurve;
 import java.util.UUID;
 import org.springframework.stereotype.Component;
 import org.springframework.transaction.annotation.Transactional;
@@ -17,11 +18,24 @@ public class TestRunDirectory {
     private final TestRunRepository runs;
     private final TestRunService service;
     private final AnalysisArchive archive;
+    private final CurveFileRepository files;
+    private final CurveContentStore contents;
+    private final CurveSettings curveSettings;
 
-    TestRunDirectory(TestRunRepository runs, TestRunService service, AnalysisArchive archive) {
+    TestRunDirectory(TestRunRepository runs, TestRunService service, AnalysisArchive archive,
+            CurveFileRepository files, CurveContentStore contents, CurveSettings curveSettings) {
         this.runs = runs;
         this.service = service;
         this.archive = archive;
+        this.files = files;
+        this.contents = contents;
+        this.curveSettings = curveSettings;
+    }
+
+    /** A run's raw curve read again from its stored bytes (for drawing it), when uploaded. */
+    @Transactional(readOnly = true)
+    public Optional<RawCurve> curveOf(UUID testRunId) {
+        return files.findByTestRunId(testRunId).map(f -> StoredCurves.read(contents.get(f.id()), curveSettings));
     }
 
     /** A specimen's valid test run with its current analysis, when both exist. */

@@ -63,6 +63,15 @@ class DemoSeedTest extends IntegrationTest {
                         + "JOIN specimen s ON s.id = t.specimen_id WHERE s.lab_identifier = 'DL-26-0118-A'")
                         .query(String.class).single()).contains("ELONGATION_FROM_EXTENSOMETER")
                         .doesNotContain("STRAIN_RATE_OUTSIDE_RANGE");
+                // demo certificates: four issued, the plate's revised (rev 0 superseded), one with a non-conformity
+                String demoCertificates = "SELECT count(*) FROM certificate c WHERE EXISTS (SELECT 1 FROM certificate_line l"
+                        + " JOIN specimen s ON s.id = l.specimen_id WHERE l.certificate_id = c.id"
+                        + " AND s.lab_identifier LIKE 'DL-26-%')";
+                assertThat(count(demoCertificates)).isEqualTo(5);
+                assertThat(count(demoCertificates + " AND c.revision = 1")).isEqualTo(1);
+                assertThat(count(demoCertificates + " AND EXISTS (SELECT 1 FROM certificate_status_change x"
+                        + " WHERE x.certificate_id = c.id AND x.status = 'SUPERSEDED')")).isEqualTo(1);
+                assertThat(count(demoCertificates + " AND NOT c.all_lines_pass")).isGreaterThanOrEqualTo(1);
                 status.setRollbackOnly();
             });
         } finally {

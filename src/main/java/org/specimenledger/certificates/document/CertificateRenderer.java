@@ -68,6 +68,10 @@ public final class CertificateRenderer {
         context.setProperty("net.sf.jasperreports.awt.ignore.missing.font", "false");
         context.setProperty("net.sf.jasperreports.default.font.name", "DejaVu Sans");
         context.setProperty("net.sf.jasperreports.default.pdf.embedded", "true");
+        // The compiler writes each template's expression class to a file named after a hash of the template, in
+        // java.io.tmpdir by default: two processes compiling the same templates at once (two instances on one
+        // host, parallel builds) then overwrite and delete each other's files. A private folder per renderer avoids it.
+        context.setProperty("net.sf.jasperreports.compiler.temp.dir", privateCompileFolder());
         main = compile("certificate");
         Map<String, JasperReport> subs = new HashMap<>();
         for (String name : SUBREPORTS) {
@@ -221,6 +225,16 @@ public final class CertificateRenderer {
             throw new UncheckedIOException("cannot read " + path, e);
         } catch (JRException e) {
             throw new IllegalStateException("template does not compile: " + path + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static String privateCompileFolder() {
+        try {
+            java.nio.file.Path folder = java.nio.file.Files.createTempDirectory("certificate-templates-");
+            folder.toFile().deleteOnExit();
+            return folder.toString();
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot make a folder to compile the certificate templates in", e);
         }
     }
 

@@ -21,7 +21,7 @@ import org.verapdf.pdfa.results.TestAssertion;
 import org.verapdf.pdfa.results.ValidationResult;
 
 /** Reads a rendered PDF back with PDFBox, and validates it with veraPDF: the tests' independent eyes. */
-final class PdfReadBack {
+public final class PdfReadBack {
 
     static {
         VeraGreenfieldFoundryProvider.initialise();
@@ -31,7 +31,7 @@ final class PdfReadBack {
     }
 
     /** The text of each page, in page order, with runs of white space collapsed to one space. */
-    static List<String> pageTexts(byte[] pdf) {
+    public static List<String> pageTexts(byte[] pdf) {
         try (PDDocument document = Loader.loadPDF(pdf)) {
             PDFTextStripper stripper = new PDFTextStripper();
             List<String> pages = new ArrayList<>();
@@ -46,7 +46,7 @@ final class PdfReadBack {
         }
     }
 
-    static String text(byte[] pdf) {
+    public static String text(byte[] pdf) {
         return String.join(" ", pageTexts(pdf));
     }
 
@@ -66,7 +66,7 @@ final class PdfReadBack {
     }
 
     /** The failed rules of a veraPDF validation against {@code flavour}, empty when compliant. */
-    static List<String> failedRules(byte[] pdf, PDFAFlavour flavour) {
+    public static List<String> failedRules(byte[] pdf, PDFAFlavour flavour) {
         try (PDFAParser parser = Foundries.defaultInstance().createParser(new ByteArrayInputStream(pdf), flavour);
              PDFAValidator validator = Foundries.defaultInstance().createValidator(flavour, false)) {
             ValidationResult result = validator.validate(parser);
