@@ -1,7 +1,6 @@
 package org.specimenledger.certificates;
 
 import java.math.BigDecimal;
-import java.math.RoundingMode;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -13,6 +12,7 @@ import java.util.Set;
 import java.util.UUID;
 import java.util.stream.Collectors;
 import org.specimenledger.analysis.conformity.Verdict;
+import org.specimenledger.analysis.units.ReportingUnits;
 import org.specimenledger.certificates.document.CertificateDocument;
 import org.specimenledger.certificates.document.StressStrainCurve;
 import org.specimenledger.curve.RawCurve;
@@ -48,7 +48,8 @@ final class CertificateDocuments {
         List<CertificateDocument.Heat> heats = specimenOrder.stream().map(id -> s.specimens().get(id).heatId())
                 .distinct().map(s.heats()::get).map(CertificateDocuments::heat).toList();
         List<CertificateDocument.Specimen> specimens = specimenOrder.stream()
-                .map(id -> specimen(s.specimens().get(id), s.heats().get(s.specimens().get(id).heatId()))).toList();
+                .map(id -> specimen(s.specimens().get(id), s.heats().get(s.specimens().get(id).heatId()), units(s.order())))
+                .toList();
         List<TestRunView> runs = lines.stream().map(CertificateLine::testRunId).distinct().map(s.runs()::get).toList();
         List<AnalysisRunView> analyses = lines.stream().map(CertificateLine::analysisRunId).distinct()
                 .map(s.analyses()::get).toList();
@@ -68,7 +69,7 @@ final class CertificateDocuments {
                 new CertificateDocument.Customer(s.customer().name(), s.customer().address(),
                         s.order().purchaseOrder()),
                 new CertificateDocument.Product(c.productDescription(), s.order().materialSpecification()),
-                heats, specimens, conditions(runs, s.order()), lines.stream().map(CertificateDocuments::row).toList(),
+                heats, specimens, conditions(runs, s.order()), lines.stream().map(l -> row(l, units(s.order()))).toList(),
                 c.decisionRuleStatement(), deviations(c, lines),
                 equipment(analyses), software(analyses),
                 new CertificateDocument.Signatory(c.signatoryName(), c.signatoryFunction(), c.issueDate()),
@@ -83,18 +84,20 @@ final class CertificateDocuments {
                         : h.nominalThicknessMm().stripTrailingZeros().toPlainString() + " mm");
     }
 
-    private static CertificateDocument.Specimen specimen(SpecimenView s, HeatView heat) {
-        String dimensions = s.meansMm().entrySet().stream()
-                .map(e -> e.getKey() + " = " + scaled(e.getValue(), 2) + " mm").collect(Collectors.joining(", "));
-        return new CertificateDocument.Specimen(s.labIdentifier(), heat.heatNumber(),
-                s.orientation().name().toLowerCase(), s.shape().name().toLowerCase(),
-                dimensions.isEmpty() ? "see S0" : dimensions, scaled(s.s0Mm2(), 2) + " mm²",
-                scaled(s.l0Mm(), 1) + " mm", scaled(s.leMm(), 1) + " mm");
+    private static ReportingUnits units(OrderView order) {
+        return order.reportingUnits() == null ? ReportingUnits.SI : order.reportingUnits();
     }
 
-    private static String scaled(BigDecimal v, int scale) {
-        return v == null ? "–" : v.setScale(scale, RoundingMode.HALF_EVEN).toPlainString();
+    private static CertificateDocument.Specimen specimen(SpecimenView s, HeatView heat, ReportingUnits units) {
+        String dimensions = s.meansMm().entrySet().stream()
+                .map(e -> e.getKey() + " = " + LineUnits.length(e.getValue(), 2, units))
+                .collect(Collectors.joining(", "));
+        return new CertificateDocument.Specimen(s.labIdentifier(), heat.heatNumber(),
+                s.orientation().name().toLowerCase(), s.shape().name().toLowerCase(),
+                dimensions.isEmpty() ? "see S0" : dimensions, LineUnits.area(s.s0Mm2(), 2, units),
+                LineUnits.length(s.l0Mm(), 1, units), LineUnits.length(s.leMm(), 1, units));
     }
+
 
     private static CertificateDocument.TestConditions conditions(List<TestRunView> runs, OrderView order) {
         Set<String> standards = new LinkedHashSet<>();
@@ -116,7 +119,14 @@ final class CertificateDocuments {
     }
 
     static CertificateDocument.ResultRow row(CertificateLine l) {
-        String value = l.reported() != null && "DETERMINED".equals(l.status()) ? l.reported()
+        return row(l, ReportingUnits.SI);
+    }
+
+    /** A results-table row; determined values in the order's units (SI, US customary or both, SI first). */
+    static CertificateDocument.ResultRow row(CertificateLine l, ReportingUnits units) {
+        LineUnits.Printed printed = l.reported() != null && "DETERMINED".equals(l.status())
+                ? LineUnits.printed(l, units) : new LineUnits.Printed(null, l.unit());
+        String value = printed.value() != null ? printed.value()
                 : switch (l.status()) {
                     case "NOT_APPLICABLE" -> "not applicable";
                     case "MISSING" -> "not reported";
@@ -131,7 +141,7 @@ final class CertificateDocuments {
             requirement = l.requirementUnit().isEmpty() ? limits : limits + " " + l.requirementUnit();
         }
         String verdict = l.verdict() == null ? "no requirement" : Verdict.valueOf(l.verdict()).printable();
-        return new CertificateDocument.ResultRow(l.specimenLabel(), l.property(), value, l.unit(), requirement,
+        return new CertificateDocument.ResultRow(l.specimenLabel(), l.property(), value, printed.unit(), requirement,
                 verdict, String.join(", ", l.flags()));
     }
 

@@ -150,7 +150,23 @@ class CertificateLines {
         String reason = null;
         OrderView.RequirementView shown = requirement != null ? requirement : unresolved;
         if (requirement != null) {
-            if (p != null && !unit.equals(requirement.unit())) {
+            Optional<LineUnits.InUnit> converted = p != null && !unit.equals(requirement.unit())
+                    && "DETERMINED".equals(status) && value != null && reported != null
+                    ? LineUnits.inRequirementUnit(property, value, reported, u, unit, requirement.unit(),
+                            rounding == null ? null : rounding.toString())
+                    : Optional.empty();
+            if (converted.isPresent()) {
+                // limits written in another unit (ksi, GPa, kip...): decide in the requirement's unit, on the
+                // result rounded as that unit prints it, so the limit keeps exactly the value its author wrote
+                LineUnits.InUnit c2 = converted.get();
+                ConformityDecision d = checks.check(flags).decide(
+                        new Requirement(property, Optional.ofNullable(requirement.min()),
+                                Optional.ofNullable(requirement.max()), requirement.unit()),
+                        new MeasuredResult(property, c2.value(), Optional.of(c2.reported()), PropertyStatus.DETERMINED,
+                                flags, Optional.ofNullable(c2.expandedUncertainty())));
+                verdict = d.verdict().name();
+                reason = d.reason();
+            } else if (p != null && !unit.equals(requirement.unit()) && "DETERMINED".equals(status)) {
                 verdict = Verdict.NOT_DECIDABLE.name();
                 reason = property + " is reported in " + unit + " but required in " + requirement.unit();
             } else {

@@ -60,10 +60,16 @@ public final class CertificateBench {
 
     /** An order of {@code customerId} with {@code requirements} and {@code count} tested specimens. */
     public Order order(String customerId, List<Map<String, Object>> requirements, int count) {
+        return order(customerId, requirements, count, "SI");
+    }
+
+    /** The same, with the order's choice of printed unit systems ({@code SI}, {@code US_CUSTOMARY}, ...). */
+    public Order order(String customerId, List<Map<String, Object>> requirements, int count, String reportingUnits) {
         String heat = SpecimenFixtures.registerHeat(technician);
         String order = create(manager, "/api/v1/customers/" + customerId + "/orders", Map.of(
                 "purchaseOrder", "PO-" + UUID.randomUUID(), "materialSpecification", "EN 10025-2 S355J2+N",
-                "receivedOn", TODAY.minusDays(5).toString(), "requirements", requirements));
+                "receivedOn", TODAY.minusDays(5).toString(), "requirements", requirements,
+                "reportingUnits", reportingUnits));
         List<String> specimens = new ArrayList<>();
         List<String> marks = new ArrayList<>();
         for (int i = 0; i < count; i++) {
