@@ -50,7 +50,7 @@ final class TensileRun {
         fracture = FracturePoint.locate(c.force, p);
         last = fracture != null ? fracture.index() : c.n - 1;
         // A loop must rejoin its starting force, so it ends before the highest force of the record.
-        loop = UnloadReloadLoop.find(c, fracture != null ? fracture.maximumIndex() : last, p);
+        loop = UnloadReloadLoop.find(c, fracture != null ? fracture.maximumIndex() : c.argMaxForce(0, last), p);
         reh = UpperYieldPoint.find(c.force, c.strain, last, p, loop);
         int peak = reh != null ? reh.index() : c.argMaxForce(0, last);
         elastic = ElasticSlope.fit(c, peak, last, reh != null, p);

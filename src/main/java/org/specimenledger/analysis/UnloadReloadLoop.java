@@ -4,7 +4,7 @@ package org.specimenledger.analysis;
  * One unload–reload loop inside a tensile record, as laboratories run it to set the elastic slope when
  * the linear part of the first loading is unclear [M: ISO 6892-1, Rp with an unload–reload loop].
  *
- * <p>Detection [CP]: from the running force maximum u, the force falls to at most
+ * <p>Detection [CP]: from the running force maximum u (at least 10 % of the highest force), the force falls to at most
  * (1 − {@code loopMinimumDropPercent}/100)·F(u) while the extension falls below its value at u (a yield
  * drop or a fracture keeps extending; an unloading goes back), and later rises to F(u) again at the
  * rejoin point r. The lowest force between u and r is the turning point m. The first such loop counts;
@@ -23,16 +23,23 @@ record UnloadReloadLoop(int unloadIndex, int turnIndex, int rejoinIndex, Straigh
     private static final double BRANCH_LOWER = 0.10;
     private static final double BRANCH_UPPER = 0.90;
 
-    /** The first loop in [0, last], or {@code null}. */
+    /**
+     * An unloading must start at no less than this fraction of the highest force in the range [CP], so
+     * that noise around zero force at the start of a record is never taken for a loop.
+     */
+    static final double MINIMUM_FORCE_FRACTION = 0.10;
+
+    /** The first loop in [0, last], where last is the highest force of the record, or {@code null}. */
     static UnloadReloadLoop find(CurveArrays c, int last, TensileParameters p) {
         double keep = 1 - p.loopMinimumDropPercent() / 100;
         double[] f = c.force;
         double[] x = c.extension;
+        double floor = MINIMUM_FORCE_FRACTION * f[last];
         int u = 0;
         for (int i = 1; i <= last; i++) {
             if (f[i] > f[u]) {
                 u = i;
-            } else if (f[i] <= keep * f[u] && x[i] < x[u] && f[u] > 0) {
+            } else if (f[i] <= keep * f[u] && x[i] < x[u] && f[u] >= floor && f[u] > 0) {
                 int m = i;
                 for (int j = i + 1; j <= last; j++) {
                     if (f[j] < f[m]) {

@@ -61,6 +61,35 @@ class RealRecordUploadTest extends TestRunTesting {
                 .contains("equipment setting");
     }
 
+    @Test
+    void crossheadOnlyRecordReportsNoModulusAndIsFlagged() {
+        TestRunFixtures.Bench b = bench();
+        String id = register(b);
+        String full = new String(SyntheticCurves.rambergOsgoodExtensometerRemoved(200_000, 300, 10, b.s0Mm2(), 50, 0.05,
+                2000, 1.0, 0), java.nio.charset.StandardCharsets.UTF_8);
+        // drop the extension column: "time,force,extension,crosshead" → "time,force,crosshead"
+        StringBuilder csv = new StringBuilder("# specimen: " + b.labIdentifier() + " (crosshead only)\n");
+        full.lines().forEach(line -> {
+            if (line.startsWith("#")) {
+                return;
+            }
+            String[] cells = line.split(",", -1);
+            csv.append(cells[0]).append(',').append(cells[1]).append(',').append(cells[3]).append('\n');
+        });
+
+        JsonNode analysis = uploaded(id, csv.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8))
+                .get("analysis");
+
+        JsonNode properties = analysis.get("results").get("properties");
+        assertThat(properties.get("E").get("status").asString()).isEqualTo("NOT_DETERMINABLE");
+        assertThat(properties.get("E").get("reason").asString()).contains("crosshead data");
+        // C = 0 in this file, so crosshead − 20 mm is the extension: Rp0.2 = σ0.2 = 300 MPa [Ramberg & Osgood 1943]
+        assertThat(properties.get("Rp0.2").get("value").asDouble()).isCloseTo(300.0, within(1.0));
+        JsonNode flag = flag(analysis, ResultFlag.CROSSHEAD_ONLY);
+        assertThat(flag.get("properties").valueStream().map(JsonNode::asString)).contains("E", "Rp0.2", "At");
+        assertThat(flag(analysis, "COMPLIANCE_NOT_GIVEN").get("message").asString()).contains("deflection");
+    }
+
     private static JsonNode flag(JsonNode analysis, String code) {
         return analysis.get("flags").valueStream().filter(f -> f.get("code").asString().equals(code)).findFirst()
                 .orElseThrow(() -> new AssertionError("no flag " + code + " in " + analysis.get("flags")));
