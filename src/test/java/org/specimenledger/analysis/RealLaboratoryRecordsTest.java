@@ -211,6 +211,14 @@ class RealLaboratoryRecordsTest {
         assertThat(a.property("Agt").value()).isCloseTo(b.property("Agt").value(), within(0.005));
     }
 
+    @Test
+    void noiseAroundZeroForceIsNotALoop() {
+        // 20 N force noise and 0.2 µm extension noise make the first points go up and down at near-zero force
+        TensileResult r = AnalysisCurves.rambergOsgood(E, SIGMA02, 10, 0.02, 4000).withNoise(3, 20, 0.0002).analyse();
+        assertThat(r.hasWarning("UNLOAD_RELOAD_LOOP")).isFalse();
+        assertThat(r.hasWarning("TOE_COMPENSATED")).isFalse();
+    }
+
     // --- item 5: data quality ---------------------------------------------------------------------------
 
     @Test
