@@ -47,10 +47,12 @@ final class TensileRun {
 
     TensileResult run() {
         warnings.addAll(c.source.notes());
-        fracture = FracturePoint.locate(c.force, p);
+        // A loop must rejoin its starting force, so it ends before the highest force of the record; both come
+        // from one pass.
+        UnloadReloadLoop.Scan scan = UnloadReloadLoop.scan(c, p);
+        fracture = FracturePoint.locate(c.force, p, scan.maximumIndex());
         last = fracture != null ? fracture.index() : c.n - 1;
-        // A loop must rejoin its starting force, so it ends before the highest force of the record.
-        loop = UnloadReloadLoop.find(c, fracture != null ? fracture.maximumIndex() : c.argMaxForce(0, last), p);
+        loop = scan.loop();
         reh = UpperYieldPoint.find(c.force, c.strain, last, p, loop);
         int peak = reh != null ? reh.index() : c.argMaxForce(0, last);
         elastic = ElasticSlope.fit(c, peak, last, reh != null, p);

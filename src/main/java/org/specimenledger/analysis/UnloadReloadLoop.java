@@ -7,8 +7,9 @@ package org.specimenledger.analysis;
  * <p>Detection [CP]: from the running force maximum u (at least 10 % of the highest force), the force falls to at most
  * (1 − {@code loopMinimumDropPercent}/100)·F(u) while the extension falls below its value at u (a yield
  * drop or a fracture keeps extending; an unloading goes back), and later rises to F(u) again at the
- * rejoin point r. The lowest force between u and r is the turning point m. The first such loop counts;
- * one pass, no allocation.
+ * rejoin point r. The lowest force between u and r is the turning point m. The first such loop counts.
+ * The candidates are found in the pass that also finds the highest force, so a record without a loop
+ * costs no extra pass.
  *
  * <p>Slope [CP]: least squares of stress on strain over the reloading branch m…r, on the points between
  * 10 % and 90 % of the branch's stress rise, which leaves out the rounded turning ends.
@@ -29,30 +30,78 @@ record UnloadReloadLoop(int unloadIndex, int turnIndex, int rejoinIndex, Straigh
      */
     static final double MINIMUM_FORCE_FRACTION = 0.10;
 
-    /** The first loop in [0, last], where last is the highest force of the record, or {@code null}. */
-    static UnloadReloadLoop find(CurveArrays c, int last, TensileParameters p) {
+    /** Candidates kept at once while scanning; noise near zero force is purged as force rises. */
+    private static final int CANDIDATES = 4;
+
+    /**
+     * One pass over the record that finds the index of its first highest force (which the fracture
+     * search needs anyway) and, in the same pass, where unloadings begin; the first unloading from at least
+     * 10 % of the highest force that rejoins its starting force before the maximum is the loop.
+     */
+    static Scan scan(CurveArrays c, TensileParameters p) {
         double keep = 1 - p.loopMinimumDropPercent() / 100;
         double[] f = c.force;
         double[] x = c.extension;
-        double floor = MINIMUM_FORCE_FRACTION * f[last];
+        int[] us = new int[CANDIDATES];
+        int[] is = new int[CANDIDATES];
+        int kept = 0;
         int u = 0;
-        for (int i = 1; i <= last; i++) {
-            if (f[i] > f[u]) {
+        double threshold = keep * f[0];
+        for (int i = 1; i < c.n; i++) {
+            double fi = f[i];
+            if (fi > f[u]) {
                 u = i;
-            } else if (f[i] <= keep * f[u] && x[i] < x[u] && f[u] >= floor && f[u] > 0) {
-                int m = i;
-                for (int j = i + 1; j <= last; j++) {
-                    if (f[j] < f[m]) {
-                        m = j;
-                    }
-                    if (f[j] >= f[u]) {
-                        return of(c, u, m, j, p);
-                    }
+                threshold = keep * fi;
+            } else if (fi <= threshold && x[i] < x[u] && f[u] > 0 && (kept == 0 || us[kept - 1] != u)) {
+                kept = purge(f, us, is, kept, MINIMUM_FORCE_FRACTION * f[u]);
+                if (kept < CANDIDATES) {
+                    us[kept] = u;
+                    is[kept++] = i;
                 }
-                return null; // never reloaded: fracture or end of record
             }
         }
-        return null;
+        int iMax = u;
+        double floor = MINIMUM_FORCE_FRACTION * f[iMax];
+        for (int k = 0; k < kept; k++) {
+            if (f[us[k]] < floor) {
+                continue;
+            }
+            UnloadReloadLoop loop = reloaded(c, us[k], is[k], iMax, p);
+            if (loop != null) {
+                return new Scan(iMax, loop);
+            }
+        }
+        return new Scan(iMax, null);
+    }
+
+    /** The index of the first highest force, and the loop or {@code null}. */
+    record Scan(int maximumIndex, UnloadReloadLoop loop) {
+    }
+
+    private static int purge(double[] f, int[] us, int[] is, int kept, double floor) {
+        int w = 0;
+        for (int k = 0; k < kept; k++) {
+            if (f[us[k]] >= floor) {
+                us[w] = us[k];
+                is[w++] = is[k];
+            }
+        }
+        return w;
+    }
+
+    /** From the unloading at u (seen at i): the lowest force, then the rejoin at or above F(u) by the maximum. */
+    private static UnloadReloadLoop reloaded(CurveArrays c, int u, int i, int last, TensileParameters p) {
+        double[] f = c.force;
+        int m = i;
+        for (int j = i + 1; j <= last; j++) {
+            if (f[j] < f[m]) {
+                m = j;
+            }
+            if (f[j] >= f[u]) {
+                return of(c, u, m, j, p);
+            }
+        }
+        return null; // never reloaded before the maximum
     }
 
     private static UnloadReloadLoop of(CurveArrays c, int u, int m, int r, TensileParameters p) {
