@@ -12,6 +12,12 @@ final class CurveArrays {
     final double[] stress;
     final double[] strain;
     final int n;
+    /** Where the extension came from; the extensometer for the whole record unless set. */
+    ExtensionSource source;
+    /** Points sharing the time stamp of the point before (counted while validating time). */
+    int repeatedTimes;
+    /** First point repeating its predecessor's time stamp, or −1. */
+    int firstRepeatedTime = -1;
 
     private CurveArrays(double[] force, double[] extension, double[] time, double[] stress, double[] strain) {
         this.force = force;
@@ -22,12 +28,48 @@ final class CurveArrays {
         this.n = force.length;
     }
 
-    static CurveArrays validated(double[] forceN, double[] extensionMm, double[] timeS, TensileSpecimen specimen,
-            int minimumPoints) {
+    /**
+     * Validates a record whose extension may come partly or wholly from the crosshead: extension may be
+     * null (crosshead only) or end in NaN (extensometer removed) when a crosshead channel is given; see
+     * {@link ExtensionSource}. Without a crosshead every extension must be finite.
+     */
+    static CurveArrays validated(double[] forceN, double[] extensionMm, double[] timeS, double[] crossheadMm,
+            TensileSpecimen specimen, TensileParameters p) {
         if (specimen == null) {
             throw new AnalysisRejected("specimen is required");
         }
-        requireSameLength(forceN, extensionMm, timeS, minimumPoints);
+        if (forceN == null || extensionMm == null && crossheadMm == null) {
+            throw new AnalysisRejected(crossheadMm == null && forceN != null ? "forceN and extensionMm are required"
+                    : "forceN and extensionMm (or crossheadMm) are required");
+        }
+        requireSameLength(forceN, extensionMm != null ? extensionMm : crossheadMm, timeS, p.minimumPoints());
+        if (crossheadMm != null) {
+            if (crossheadMm.length != forceN.length) {
+                throw new AnalysisRejected("crossheadMm has " + crossheadMm.length + " points but forceN has "
+                        + forceN.length + "; the arrays must have equal length");
+            }
+            requireFinite("forceN", forceN, "force");
+            requireFinite("crossheadMm", crossheadMm, "crosshead displacement");
+            if (extensionMm != null) {
+                for (int i = 0; i < extensionMm.length; i++) {
+                    if (Double.isInfinite(extensionMm[i])) {
+                        throw new AnalysisRejected("extensionMm[" + i + "] is " + extensionMm[i]
+                                + "; every extension must be finite (NaN marks a removed extensometer)");
+                    }
+                }
+            }
+        }
+        int[] repeated = timeS != null ? requireTime(timeS) : new int[] {0, -1};
+        ExtensionSource source = ExtensionSource.of(forceN, extensionMm, crossheadMm, specimen, p);
+        CurveArrays c = derived(forceN, source.extension(), timeS, specimen);
+        c.source = source;
+        c.repeatedTimes = repeated[0];
+        c.firstRepeatedTime = repeated[1];
+        return c;
+    }
+
+    /** Stress and strain, in the same pass as the check that force and extension are finite. */
+    static CurveArrays derived(double[] forceN, double[] extensionMm, double[] timeS, TensileSpecimen specimen) {
         double[] stress = new double[forceN.length];
         double[] strain = new double[forceN.length];
         double s0 = specimen.s0Mm2();
@@ -44,10 +86,15 @@ final class CurveArrays {
             stress[i] = f / s0;
             strain[i] = x / le;
         }
-        if (timeS != null) {
-            requireTime(timeS);
-        }
         return new CurveArrays(forceN, extensionMm, timeS, stress, strain);
+    }
+
+    private static void requireFinite(String name, double[] values, String what) {
+        for (int i = 0; i < values.length; i++) {
+            if (!Double.isFinite(values[i])) {
+                throw new AnalysisRejected(name + "[" + i + "] is " + values[i] + "; every " + what + " must be finite");
+            }
+        }
     }
 
     /**
@@ -70,7 +117,10 @@ final class CurveArrays {
         }
     }
 
-    private static void requireTime(double[] t) {
+    /** Checks time and counts repeated stamps: returns {count, first repeating index or −1}. */
+    private static int[] requireTime(double[] t) {
+        int repeated = 0;
+        int first = -1;
         for (int i = 0; i < t.length; i++) {
             if (!Double.isFinite(t[i])) {
                 throw new AnalysisRejected("timeS[" + i + "] is " + t[i] + "; every time must be finite");
@@ -79,7 +129,11 @@ final class CurveArrays {
                 throw new AnalysisRejected("timeS[" + i + "] = " + t[i] + " s is earlier than timeS[" + (i - 1) + "] = "
                         + t[i - 1] + " s; time must not decrease");
             }
+            if (i > 0 && t[i] == t[i - 1] && repeated++ == 0) {
+                first = i;
+            }
         }
+        return new int[] {repeated, first};
     }
 
     /** Index of the first highest force in [from, to], both inclusive. */

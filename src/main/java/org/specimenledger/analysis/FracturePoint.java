@@ -25,6 +25,12 @@ record FracturePoint(int index, String rule, int maximumIndex) {
                 iMax = i;
             }
         }
+        return locate(force, p, iMax);
+    }
+
+    /** As {@link #locate(double[], TensileParameters)}, with the index of the first highest force known. */
+    static FracturePoint locate(double[] force, TensileParameters p, int iMax) {
+        int n = force.length;
         double fmax = force[iMax];
         if (!(fmax > 0)) {
             return null;

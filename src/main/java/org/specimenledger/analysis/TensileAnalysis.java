@@ -25,7 +25,7 @@ public final class TensileAnalysis {
      * Version of the tensile method. It must change whenever any algorithm, default parameter or
      * rounding rule changes, so a stored result can always be traced to the code that produced it.
      */
-    public static final String METHOD_VERSION = "tensile/1.0.0";
+    public static final String METHOD_VERSION = "tensile/1.1.0";
 
     private TensileAnalysis() {
     }
@@ -49,7 +49,33 @@ public final class TensileAnalysis {
         if (p == null) {
             throw new AnalysisRejected("parameters are required");
         }
-        CurveArrays c = CurveArrays.validated(forceN, extensionMm, timeS, specimen, p.minimumPoints());
+        return analyse(forceN, extensionMm, timeS, null, specimen, p);
+    }
+
+    /**
+     * Analyses one tensile record that may carry a crosshead channel beside the extensometer: when the
+     * extensometer stops (its values end in NaN, or it freezes) the extension continues from the
+     * crosshead with the machine compliance removed; with no extensometer at all the strains come from
+     * the crosshead alone (see {@code ExtensionSource}; warnings and evidence say which points did).
+     *
+     * @param forceN force in N, finite
+     * @param extensionMm extensometer extension over Le in mm: finite, or ending in NaN from the point the
+     *     extensometer was removed (only with a crosshead), or {@code null} for a crosshead-only record
+     * @param timeS time in s or {@code null}
+     * @param crossheadMm crosshead (machine) displacement in mm, finite, or {@code null}
+     * @param specimen the test piece's geometry
+     * @param p parameters
+     * @return the result
+     * @throws AnalysisRejected as {@link #analyse(double[], double[], double[], TensileSpecimen,
+     *     TensileParameters)}, and when neither extension nor crosshead is given or a removed extensometer
+     *     resumes
+     */
+    public static TensileResult analyse(double[] forceN, double[] extensionMm, double[] timeS, double[] crossheadMm,
+            TensileSpecimen specimen, TensileParameters p) {
+        if (p == null) {
+            throw new AnalysisRejected("parameters are required");
+        }
+        CurveArrays c = CurveArrays.validated(forceN, extensionMm, timeS, crossheadMm, specimen, p);
         return new TensileRun(c, specimen, p).run();
     }
 }

@@ -41,7 +41,14 @@ final class TensileParameterMap {
             new Key("yieldStrainRatesPerS", TensileParameters::yieldStrainRatesPerS, (b, v) -> b.yieldStrainRatesPerS = list("yieldStrainRatesPerS", v)),
             new Key("hardeningStrainRatesPerS", TensileParameters::hardeningStrainRatesPerS, (b, v) -> b.hardeningStrainRatesPerS = list("hardeningStrainRatesPerS", v)),
             new Key("strainRateTolerancePercent", TensileParameters::strainRateTolerancePercent, (b, v) -> b.strainRateTolerancePercent = num("strainRateTolerancePercent", v)),
-            new Key("rounding", p -> p.rounding().name(), (b, v) -> b.rounding = rule(v)));
+            new Key("rounding", p -> p.rounding().name(), (b, v) -> b.rounding = rule(v)),
+            // Added with tensile/1.1.0; a map stored before lacks them and takes the defaults.
+            new Key("machineComplianceMmPerN", TensileParameters::machineComplianceMmPerN, (b, v) -> b.machineComplianceMmPerN = v == null ? null : num("machineComplianceMmPerN", v)),
+            new Key("modulusFromCrosshead", TensileParameters::modulusFromCrosshead, (b, v) -> b.modulusFromCrosshead = bool("modulusFromCrosshead", v)),
+            new Key("slopeFromLoop", TensileParameters::slopeFromLoop, (b, v) -> b.slopeFromLoop = bool("slopeFromLoop", v)),
+            new Key("loopMinimumDropPercent", TensileParameters::loopMinimumDropPercent, (b, v) -> b.loopMinimumDropPercent = num("loopMinimumDropPercent", v)),
+            new Key("extensometerFreezePoints", TensileParameters::extensometerFreezePoints, (b, v) -> b.extensometerFreezePoints = integer("extensometerFreezePoints", v)),
+            new Key("yieldDropMinimumPoints", TensileParameters::yieldDropMinimumPoints, (b, v) -> b.yieldDropMinimumPoints = integer("yieldDropMinimumPoints", v)));
 
     private TensileParameterMap() {
     }

@@ -41,6 +41,22 @@ import java.util.Map;
  * @param strainRateTolerancePercent relative tolerance of each range in % (default 20) [M]
  * @param uncertainty inputs to the uncertainty budget
  * @param rounding rule set for reported strings (default ISO 6892-1)
+ * @param machineComplianceMmPerN machine compliance C in mm/N from an equipment setting (crosshead
+ *     displacement = specimen extension + C·F, a linear spring in series), ≥ 0, or {@code null} when not
+ *     given: then estimated from the elastic part of both channels when the extensometer is removed,
+ *     and taken as 0 (with a warning) for a crosshead-only record (default null) [CP]
+ * @param modulusFromCrosshead whether a crosshead-only record reports its apparent slope as E; by
+ *     default E is not determinable from crosshead data (default false) [CP: ASTM E8 allows crosshead
+ *     displacement for offset yield with a stated loss of accuracy, M]
+ * @param slopeFromLoop whether the reloading branch of an unload–reload loop sets mE for Rp when the
+ *     record holds one (default true) [M: ISO 6892-1, loop when the linear part is unclear]
+ * @param loopMinimumDropPercent an unloading counts as a loop when force falls by at least this % of
+ *     the force where it began, while extension decreases, and later rises back to it, in (0, 100)
+ *     (default 20) [CP]
+ * @param extensometerFreezePoints an extensometer reading unchanged over at least this many points
+ *     above the fracture threshold force counts as stopped (removed or frozen), ≥ 2 (default 10) [CP]
+ * @param yieldDropMinimumPoints fewest points from ReH to the bottom of its force drop for the drop to
+ *     count as resolved by the sampling rate, ≥ 1 (default 3) [CP]
  */
 public record TensileParameters(List<Double> proofOffsetsPercent, List<Double> totalExtensionsPercent,
         double modulusWindowLowerFraction, double modulusWindowUpperFraction, int modulusMaxIterations,
@@ -49,11 +65,12 @@ public record TensileParameters(List<Double> proofOffsetsPercent, List<Double> t
         int fractureDropWindowPoints, double fractureFallbackPercentOfFmax, double flatMaximumTolerancePercent,
         int minimumPoints, List<Double> elasticStrainRatesPerS, List<Double> yieldStrainRatesPerS,
         List<Double> hardeningStrainRatesPerS, double strainRateTolerancePercent, UncertaintyInputs uncertainty,
-        RoundingRule rounding) {
+        RoundingRule rounding, Double machineComplianceMmPerN, boolean modulusFromCrosshead, boolean slopeFromLoop,
+        double loopMinimumDropPercent, int extensometerFreezePoints, int yieldDropMinimumPoints) {
 
     private static final TensileParameters DEFAULTS = new TensileParameters(List.of(0.2), List.of(0.5), 0.10, 0.40,
             20, 5, 0.995, true, 0.5, 0.05, 0.2, 25, 5, 10, 0.1, 10, List.of(0.00025), List.of(0.00025, 0.002),
-            List.of(0.0067), 20, UncertaintyInputs.defaults(), RoundingRule.ISO_6892_1);
+            List.of(0.0067), 20, UncertaintyInputs.defaults(), RoundingRule.ISO_6892_1, null, false, true, 20, 10, 3);
 
     /** Validates ranges and freezes the lists. */
     public TensileParameters {
@@ -83,6 +100,14 @@ public record TensileParameters(List<Double> proofOffsetsPercent, List<Double> t
         if (!(flatMaximumTolerancePercent >= 0 && flatMaximumTolerancePercent < 100)) {
             throw new AnalysisRejected("flatMaximumTolerancePercent must be in [0, 100), got " + flatMaximumTolerancePercent);
         }
+        if (machineComplianceMmPerN != null && !(machineComplianceMmPerN >= 0 && machineComplianceMmPerN < 1)) {
+            throw new AnalysisRejected("machineComplianceMmPerN must be in [0, 1) mm/N, got " + machineComplianceMmPerN);
+        }
+        if (!(loopMinimumDropPercent > 0 && loopMinimumDropPercent < 100)) {
+            throw new AnalysisRejected("loopMinimumDropPercent must be in (0, 100), got " + loopMinimumDropPercent);
+        }
+        atLeast("extensometerFreezePoints", extensometerFreezePoints, 2);
+        atLeast("yieldDropMinimumPoints", yieldDropMinimumPoints, 1);
         if (uncertainty == null || rounding == null) {
             throw new AnalysisRejected("uncertainty and rounding are required");
         }

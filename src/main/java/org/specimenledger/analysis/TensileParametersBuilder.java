@@ -29,6 +29,12 @@ public final class TensileParametersBuilder {
     double strainRateTolerancePercent;
     UncertaintyInputs uncertainty;
     RoundingRule rounding;
+    Double machineComplianceMmPerN;
+    boolean modulusFromCrosshead;
+    boolean slopeFromLoop;
+    double loopMinimumDropPercent;
+    int extensometerFreezePoints;
+    int yieldDropMinimumPoints;
 
     TensileParametersBuilder(TensileParameters p) {
         proofOffsetsPercent = p.proofOffsetsPercent();
@@ -53,6 +59,12 @@ public final class TensileParametersBuilder {
         strainRateTolerancePercent = p.strainRateTolerancePercent();
         uncertainty = p.uncertainty();
         rounding = p.rounding();
+        machineComplianceMmPerN = p.machineComplianceMmPerN();
+        modulusFromCrosshead = p.modulusFromCrosshead();
+        slopeFromLoop = p.slopeFromLoop();
+        loopMinimumDropPercent = p.loopMinimumDropPercent();
+        extensometerFreezePoints = p.extensometerFreezePoints();
+        yieldDropMinimumPoints = p.yieldDropMinimumPoints();
     }
 
     /** @param v offsets in % @return this builder */
@@ -101,6 +113,18 @@ public final class TensileParametersBuilder {
     public TensileParametersBuilder uncertainty(UncertaintyInputs v) { uncertainty = v; return this; }
     /** @param v rule set @return this builder */
     public TensileParametersBuilder rounding(RoundingRule v) { rounding = v; return this; }
+    /** @param v compliance in mm/N, or null @return this builder */
+    public TensileParametersBuilder machineComplianceMmPerN(Double v) { machineComplianceMmPerN = v; return this; }
+    /** @param v whether crosshead-only records report E @return this builder */
+    public TensileParametersBuilder modulusFromCrosshead(boolean v) { modulusFromCrosshead = v; return this; }
+    /** @param v whether a loop sets mE @return this builder */
+    public TensileParametersBuilder slopeFromLoop(boolean v) { slopeFromLoop = v; return this; }
+    /** @param v % of the force at unloading @return this builder */
+    public TensileParametersBuilder loopMinimumDropPercent(double v) { loopMinimumDropPercent = v; return this; }
+    /** @param v points @return this builder */
+    public TensileParametersBuilder extensometerFreezePoints(int v) { extensometerFreezePoints = v; return this; }
+    /** @param v points @return this builder */
+    public TensileParametersBuilder yieldDropMinimumPoints(int v) { yieldDropMinimumPoints = v; return this; }
 
     /**
      * Builds and validates.
@@ -114,6 +138,8 @@ public final class TensileParametersBuilder {
                 originCorrection, yieldDropPercent, yieldHoldStrainPercent, turningPointHysteresisPercent,
                 fractureDropPercentOfFmax, fractureDropWindowPoints, fractureFallbackPercentOfFmax,
                 flatMaximumTolerancePercent, minimumPoints, elasticStrainRatesPerS, yieldStrainRatesPerS,
-                hardeningStrainRatesPerS, strainRateTolerancePercent, uncertainty, rounding);
+                hardeningStrainRatesPerS, strainRateTolerancePercent, uncertainty, rounding, machineComplianceMmPerN,
+                modulusFromCrosshead, slopeFromLoop, loopMinimumDropPercent, extensometerFreezePoints,
+                yieldDropMinimumPoints);
     }
 }

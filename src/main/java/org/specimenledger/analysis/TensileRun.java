@@ -30,6 +30,13 @@ final class TensileRun {
     private int fmIndex;
     private boolean fmPassed;
     private OffsetIntersection firstProof;
+    private UnloadReloadLoop loop;
+    /** Whether mE came from the reloading branch of a loop. */
+    private boolean slopeFromLoop;
+    /** Whether a slope mE is known (from the first loading or a loop). */
+    private boolean slopeKnown;
+    /** First point searched for offset intersections. */
+    private int searchFrom;
 
     TensileRun(CurveArrays c, TensileSpecimen s, TensileParameters p) {
         this.c = c;
@@ -39,13 +46,24 @@ final class TensileRun {
     }
 
     TensileResult run() {
-        fracture = FracturePoint.locate(c.force, p);
+        warnings.addAll(c.source.notes());
+        // A loop must rejoin its starting force, so it ends before the highest force of the record; both come
+        // from one pass.
+        UnloadReloadLoop.Scan scan = UnloadReloadLoop.scan(c, p);
+        fracture = FracturePoint.locate(c.force, p, scan.maximumIndex());
         last = fracture != null ? fracture.index() : c.n - 1;
-        reh = UpperYieldPoint.find(c.force, c.strain, last, p);
+        loop = scan.loop();
+        reh = UpperYieldPoint.find(c.force, c.strain, last, p, loop);
         int peak = reh != null ? reh.index() : c.argMaxForce(0, last);
         elastic = ElasticSlope.fit(c, peak, last, reh != null, p);
         mE = elastic.slope();
         e0 = elastic.found() ? elastic.strainOrigin() : 0;
+        searchFrom = elastic.found() ? elastic.fit().firstIndex() : 0;
+        if (loop != null) {
+            useLoop();
+        }
+        slopeKnown = elastic.found() || slopeFromLoop;
+        toeCheck();
         fmStart = reh != null ? reh.dropIndex() : 0;
         fmIndex = c.argMaxForce(fmStart, last);
         fmPassed = fracture != null || maximumPassed();
@@ -53,6 +71,7 @@ final class TensileRun {
         if (reh != null) {
             yieldRange = YieldRange.of(c, reh, fmIndex, p);
         }
+        RecordQuality.check(c, reh, elastic, fmIndex, p, warnings);
 
         Map<String, PropertyResult> props = new LinkedHashMap<>();
         props.put("E", modulus());
@@ -97,13 +116,13 @@ final class TensileRun {
         if (reh != null) {
             return Yielding.DISCONTINUOUS;
         }
-        if (!elastic.found()) {
+        if (!slopeKnown) {
             warn("YIELDING_NOT_CLASSIFIED", "no elastic slope, so the 0.2 % plastic extension cannot be located;"
                     + " yielding reported as NONE");
             return Yielding.NONE;
         }
         OffsetIntersection at02 = OffsetIntersection.find(c.stress, c.strain, mE, e0,
-                ElasticSlope.CLASSIFICATION_OFFSET, elastic.fit().firstIndex(), last);
+                ElasticSlope.CLASSIFICATION_OFFSET, searchFrom, last);
         if (at02 != null) {
             return Yielding.CONTINUOUS;
         }
@@ -115,6 +134,16 @@ final class TensileRun {
     }
 
     private PropertyResult modulus() {
+        if (slopeFromLoop) {
+            StraightLineFit fit = loop.reloading();
+            Evidence e = loop.evidence().putAll(fit.evidence("slopeMPa", "interceptMPa").build())
+                    .put("strainOriginPercent", 100 * e0).put("originShiftMm", e0 * s.leMm()).build();
+            if (c.source.kind() == ExtensionSource.Kind.CROSSHEAD_ONLY && !p.modulusFromCrosshead()) {
+                return crossheadModulus(e);
+            }
+            return PropertyResult.determined("E", mE, MPA, ReportedQuantity.MODULUS, rule,
+                    "least-squares slope of the reloading branch of the unload–reload loop", e, null);
+        }
         if (!elastic.found()) {
             return PropertyResult.notDeterminable("E", MPA, "no clear elastic part: " + elastic.windowPoints()
                     + " points between " + round1(elastic.lowerStress()) + " and " + round1(elastic.upperStress())
@@ -131,9 +160,80 @@ final class TensileRun {
                     + p.modulusMaxIterations() + " iterations");
         }
         Evidence e = windowEvidence().putAll(fit.evidence("slopeMPa", "interceptMPa").build())
-                .put("strainOriginPercent", 100 * e0).build();
+                .put("strainOriginPercent", 100 * e0).put("originShiftMm", e0 * s.leMm()).build();
+        if (c.source.kind() == ExtensionSource.Kind.CROSSHEAD_ONLY && !p.modulusFromCrosshead()) {
+            return crossheadModulus(e);
+        }
         return PropertyResult.determined("E", mE, MPA, ReportedQuantity.MODULUS, rule,
                 "least-squares slope of stress on strain (extensometer)", e, null);
+    }
+
+    /** E from crosshead data measures machine and grips as well as the test piece [CP]. */
+    private PropertyResult crossheadModulus(Evidence slope) {
+        return PropertyResult.notDeterminable("E", MPA, "not determinable from crosshead data (the slope includes"
+                + " the machine and grips); the apparent slope " + round1(mE) + " MPa is used only for the Rp"
+                + " offset line; set modulusFromCrosshead to report it",
+                Evidence.builder().putAll(slope).putAll(c.source.evidence(s.leMm())).build());
+    }
+
+    /**
+     * The reloading branch sets mE; the origin stays on the first loading: the strain-axis intercept of a
+     * line with the loop's slope through the upper half of the first elastic window (past any toe).
+     */
+    private void useLoop() {
+        if (!p.slopeFromLoop()) {
+            warn("UNLOAD_RELOAD_LOOP", "an unload–reload loop at points " + loop.unloadIndex() + "–"
+                    + loop.rejoinIndex() + " was left out of ReH, Fm and Ag; slopeFromLoop is off, so mE is"
+                    + " from the first loading");
+            return;
+        }
+        if (!loop.sloped()) {
+            warn("UNLOAD_RELOAD_LOOP", "an unload–reload loop at points " + loop.unloadIndex() + "–"
+                    + loop.rejoinIndex() + " has too few reloading points for a slope; mE is from the first loading");
+            return;
+        }
+        mE = loop.reloading().slope();
+        slopeFromLoop = true;
+        if (elastic.found() && p.originCorrection()) {
+            int from = (elastic.fit().firstIndex() + elastic.fit().lastIndex() + 1) / 2;
+            int to = elastic.fit().lastIndex();
+            double sum = 0;
+            for (int i = from; i <= to; i++) {
+                sum += c.strain[i] - c.stress[i] / mE;
+            }
+            e0 = sum / (to - from + 1);
+        } else {
+            e0 = 0;
+        }
+        warn("UNLOAD_RELOAD_LOOP", "mE = " + round1(mE) + " MPa from the reloading branch of the unload–reload loop"
+                + " at points " + loop.unloadIndex() + "–" + loop.rejoinIndex() + "; the loop is left out of ReH, Fm"
+                + " and Ag");
+    }
+
+    /**
+     * Toe compensation [S: ASTM E8/E8M toe region; ISO 6892-1 origin correction, M]: the origin moves to
+     * where the elastic line meets zero force. A shift larger than the extensometer's bias limit
+     * ({@code uncertainty.extensometerBiasLimitUm}, ISO 9513 [M]) is reported as a toe.
+     */
+    private void toeCheck() {
+        double shiftMm = e0 * s.leMm();
+        if (slopeKnown && p.originCorrection() && shiftMm * 1000 > p.uncertainty().extensometerBiasLimitUm()) {
+            warn("TOE_COMPENSATED", "the elastic line meets zero force at " + round4(shiftMm) + " mm ("
+                    + round4(100 * e0) + " % of Le); extensions are measured from there (seating or slack at the"
+                    + " start of the test)");
+        }
+    }
+
+    /** Adds where the extension of these points came from, when any came from the crosshead. */
+    private Evidence.Builder sourced(Evidence.Builder b, int... indices) {
+        for (int i : indices) {
+            if (c.source.fromCrosshead(i)) {
+                b.put("extensionSource", ExtensionSource.FROM_CROSSHEAD).put("switchIndex",
+                        c.source.extensometerPoints() - 1);
+                return b;
+            }
+        }
+        return b;
     }
 
     private Evidence.Builder windowEvidence() {
@@ -183,11 +283,11 @@ final class TensileRun {
 
     private PropertyResult proof(double offsetPercent) {
         String symbol = "Rp" + plain(offsetPercent);
-        if (!elastic.found()) {
+        if (!slopeKnown) {
             return PropertyResult.notDeterminable(symbol, MPA, "no elastic slope (E not determinable)", Evidence.EMPTY);
         }
         OffsetIntersection x = OffsetIntersection.find(c.stress, c.strain, mE, e0, offsetPercent / 100,
-                elastic.fit().firstIndex(), last);
+                searchFrom, last);
         if (x == null) {
             String why = (fracture != null ? "fracture before " : "record ends before ") + plain(offsetPercent)
                     + " % plastic extension";
@@ -199,10 +299,11 @@ final class TensileRun {
         }
         double corrected = x.strain() - e0;
         double k = StrengthUncertainty.localSlope(c.stress, c.strain, 0, last, x.strain());
-        Evidence e = Evidence.builder().put("offsetPercent", offsetPercent).put("beforeIndex", x.before())
+        Evidence e = sourced(Evidence.builder().put("offsetPercent", offsetPercent).put("beforeIndex", x.before())
                 .put("afterIndex", x.after()).put("interpolationFraction", x.fraction())
                 .put("intersectionStrainPercent", 100 * corrected).put("intersectionStressMPa", x.stress())
-                .put("lineSlopeMPa", mE).put("strainOriginPercent", 100 * e0).put("localSlopeMPa", k).build();
+                .put("lineSlopeMPa", mE).put("lineSlopeSource", slopeFromLoop ? "unload-reload loop" : "first loading")
+                .put("strainOriginPercent", 100 * e0).put("localSlopeMPa", k), x.after()).build();
         return PropertyResult.determined(symbol, x.stress(), MPA, ReportedQuantity.STRENGTH, rule,
                 "parallel-line intersection, interpolated between points " + x.before() + " and " + x.after(), e,
                 StrengthUncertainty.expandedProof(x.stress(), corrected, k, p, s));
@@ -215,8 +316,8 @@ final class TensileRun {
             if (c.strain[i] >= target && c.strain[i - 1] < target) {
                 double t = (target - c.strain[i - 1]) / (c.strain[i] - c.strain[i - 1]);
                 double value = c.stress[i - 1] + t * (c.stress[i] - c.stress[i - 1]);
-                Evidence e = Evidence.builder().put("totalExtensionPercent", percent).put("beforeIndex", i - 1)
-                        .put("afterIndex", i).put("interpolationFraction", t).put("strainOriginPercent", 100 * e0)
+                Evidence e = sourced(Evidence.builder().put("totalExtensionPercent", percent).put("beforeIndex", i - 1)
+                        .put("afterIndex", i).put("interpolationFraction", t).put("strainOriginPercent", 100 * e0), i)
                         .build();
                 return PropertyResult.determined(symbol, value, MPA, ReportedQuantity.STRENGTH, rule,
                         "stress at " + plain(percent) + " % total extension, interpolated", e,
@@ -282,7 +383,8 @@ final class TensileRun {
         double fm = c.force[fmIndex];
         double threshold = fm * (1 - p.flatMaximumTolerancePercent() / 100);
         int a = fmIndex;
-        for (int i = fmStart; i <= fmIndex; i++) {
+        int plateauFrom = loop != null && loop.rejoinIndex() <= fmIndex ? Math.max(fmStart, loop.rejoinIndex()) : fmStart;
+        for (int i = plateauFrom; i <= fmIndex; i++) {
             if (c.force[i] >= threshold) {
                 a = i;
                 break;
@@ -296,12 +398,12 @@ final class TensileRun {
             }
         }
         double middle = (c.strain[a] + c.strain[b]) / 2 - e0;
-        Evidence e = Evidence.builder().put("plateauFirstIndex", a).put("plateauLastIndex", b)
+        Evidence e = sourced(Evidence.builder().put("plateauFirstIndex", a).put("plateauLastIndex", b)
                 .put("tolerancePercent", p.flatMaximumTolerancePercent()).put("strainAtFmPercent", 100 * middle)
-                .put("strainOriginPercent", 100 * e0).build();
+                .put("strainOriginPercent", 100 * e0), a, b).build();
         props.put("Agt", PropertyResult.determined("Agt", 100 * middle, PCT, ReportedQuantity.ELONGATION, rule,
                 "total extension at the middle of the maximum-force plateau", e, null));
-        if (!elastic.found()) {
+        if (!slopeKnown) {
             props.put("Ag", PropertyResult.notDeterminable("Ag", PCT, "no elastic slope (E not determinable)", e));
             return;
         }
@@ -321,8 +423,8 @@ final class TensileRun {
 
     private Evidence.Builder fractureEvidence() {
         int f = fracture.index();
-        return Evidence.builder().put("fractureIndex", f).put("fractureRule", fracture.rule())
-                .put("forceN", c.force[f]).put("strainOriginPercent", 100 * e0);
+        return sourced(Evidence.builder().put("fractureIndex", f).put("fractureRule", fracture.rule())
+                .put("forceN", c.force[f]).put("strainOriginPercent", 100 * e0), f);
     }
 
     private String noFracture() {
@@ -339,7 +441,7 @@ final class TensileRun {
         if (fracture == null) {
             return PropertyResult.notDeterminable("A", PCT, "Lu not measured and " + noFracture(), Evidence.EMPTY);
         }
-        if (!elastic.found()) {
+        if (!slopeKnown) {
             return PropertyResult.notDeterminable("A", PCT, "Lu not measured and no elastic slope to remove the elastic part",
                     fractureEvidence().build());
         }
@@ -349,8 +451,10 @@ final class TensileRun {
         }
         int f = fracture.index();
         double a = 100 * (c.strain[f] - e0 - c.stress[f] / mE);
+        String how = c.source.fromCrosshead(f) ? "from the crosshead (compliance-corrected), elastic part removed"
+                : "from extensometer, elastic part removed";
         return PropertyResult.determined("A", a, PCT, ReportedQuantity.ELONGATION, rule,
-                "from extensometer, elastic part removed", fractureEvidence().put("leMm", s.leMm()).build(), null);
+                how, fractureEvidence().put("leMm", s.leMm()).build(), null);
     }
 
     private PropertyResult reductionOfArea() {
@@ -439,6 +543,10 @@ final class TensileRun {
 
     static String plain(double percent) {
         return BigDecimal.valueOf(percent).stripTrailingZeros().toPlainString();
+    }
+
+    private static String round4(double v) {
+        return plain(Math.round(v * 1e4) / 1e4);
     }
 
     private static String round1(double v) {

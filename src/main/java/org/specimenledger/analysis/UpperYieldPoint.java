@@ -21,12 +21,25 @@ record UpperYieldPoint(int index, int dropIndex, int holdIndex) {
 
     /** Finds the upper yield point within [0, last], or {@code null} for continuous yielding. */
     static UpperYieldPoint find(double[] force, double[] strain, int last, TensileParameters p) {
+        return find(force, strain, last, p, null);
+    }
+
+    /**
+     * As {@link #find(double[], double[], int, TensileParameters)}, with the points of an unload–reload
+     * loop left out: its unloading is a force drop by design, not a yield drop.
+     */
+    static UpperYieldPoint find(double[] force, double[] strain, int last, TensileParameters p, UnloadReloadLoop loop) {
+        int skipFrom = loop == null ? Integer.MAX_VALUE : loop.unloadIndex() + 1;
+        int skipTo = loop == null ? Integer.MIN_VALUE : loop.rejoinIndex() - 1;
         double dropFraction = p.yieldDropPercent() / 100;
         double hold = p.yieldHoldStrainPercent() / 100;
         int c = 0;
         int drop = -1;
         int held = -1;
         for (int i = 1; i <= last; i++) {
+            if (i >= skipFrom && i <= skipTo) {
+                continue;
+            }
             if (force[i] > force[c]) {
                 c = i;
                 drop = -1;
@@ -45,6 +58,9 @@ record UpperYieldPoint(int index, int dropIndex, int holdIndex) {
         double rise = dropFraction * force[c];
         double lowest = force[drop];
         for (int j = drop; j <= last; j++) {
+            if (j >= skipFrom && j <= skipTo) {
+                continue;
+            }
             lowest = Math.min(lowest, force[j]);
             if (force[j] - lowest >= rise) {
                 return new UpperYieldPoint(c, drop, held);

@@ -29,7 +29,11 @@ public enum Channel {
             "lbf", UnitFactor.times("4.4482216152605"),
             "kip", UnitFactor.times("4448.2216152605"))),
 
-    /** Extensometer extension, canonical unit mm; accepts mm, µm (either micro sign), um, in. Required. */
+    /**
+     * Extensometer extension, canonical unit mm; accepts mm, µm (either micro sign), um, in. Required,
+     * except that a crosshead channel may stand in for it (a record without extensometer), and with a
+     * crosshead channel its cells may end (the extensometer was removed during the test).
+     */
     EXTENSION("extension", "mm", true, "mm, µm (or um) or in", lengthUnits()),
 
     /** Crosshead displacement, canonical unit mm; same units as extension. Optional. */

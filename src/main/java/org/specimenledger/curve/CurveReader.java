@@ -17,7 +17,9 @@ import java.util.Objects;
  *       {@link RawCurve#metadata()}, any other {@code #} line is a comment;</li>
  *   <li>one header row of {@code name [unit]} cells: {@code force} (N, kN, lbf, kip) and
  *       {@code extension} (mm, µm, um, in) are required, {@code time} (s, ms, min) and
- *       {@code crosshead} (mm, µm, um, in) optional, names case-insensitive, units case-sensitive;
+ *       {@code crosshead} (mm, µm, um, in) optional; with a crosshead channel the extension channel may
+ *       be left out (no extensometer) or its cells may end, empty to the last row (extensometer
+ *       removed, see {@link RawCurve#extensometerPoints()}), names case-insensitive, units case-sensitive;
  *       the delimiter (comma, semicolon or tab) is the one found in this row; other column names are
  *       ignored with a warning;</li>
  *   <li>data rows with exactly as many cells as the header; numeric cells in decimal notation
@@ -155,9 +157,13 @@ public final class CurveReader {
             warnings.add(rows.repeatedTimes() + (rows.repeatedTimes() == 1 ? " data row repeats" : " data rows repeat")
                     + " the time stamp of the row before, the first on line " + rows.firstRepeatedTimeLine());
         }
+        if (rows.extensionStopLine() != 0) {
+            warnings.add("the extension cells end on line " + rows.extensionStopLine() + " (extensometer removed after "
+                    + rows.extensometerPoints() + " points); the later points carry the crosshead only");
+        }
         return new RawCurve(rows.values(Channel.FORCE), rows.values(Channel.EXTENSION), rows.values(Channel.TIME),
-                rows.values(Channel.CROSSHEAD), lines.sha256Hex(), lines.byteCount(), preamble.metadata(),
-                header.channels(), warnings);
+                rows.values(Channel.CROSSHEAD), rows.extensometerPoints(), lines.sha256Hex(), lines.byteCount(),
+                preamble.metadata(), header.channels(), warnings);
     }
 
     private static boolean isBlank(byte[] b, int from, int to) {

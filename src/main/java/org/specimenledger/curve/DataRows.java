@@ -33,6 +33,12 @@ final class DataRows {
     private final UnitFactor[] factors;
     private final String[] labels;
     private final int timeSlot;
+    /** Slot of the extension channel, or -1; its cells may end (extensometer removed) when a crosshead is present. */
+    private final int extensionSlot;
+    private final boolean extensionMayStop;
+    /** Line of the first empty extension cell, 0 while the extensometer still reads. */
+    private int extensionStopLine;
+    private int extensometerPoints = -1;
     /** The delimiter repeated in all eight bytes of a long, for the word-at-a-time search. */
     private final long delimiterWord;
     private final byte[] scratch = new byte[MAX_NUMBER_LENGTH];
@@ -51,6 +57,8 @@ final class DataRows {
         this.factors = new UnitFactor[slots];
         this.labels = new String[slots];
         int time = -1;
+        int extension = -1;
+        boolean crosshead = false;
         int slot = 0;
         for (int i = 0; i < cellCount; i++) {
             Channel channel = header.channelOf(i);
@@ -64,10 +72,16 @@ final class DataRows {
             labels[slot] = channel.label();
             if (channel == Channel.TIME) {
                 time = slot;
+            } else if (channel == Channel.EXTENSION) {
+                extension = slot;
+            } else if (channel == Channel.CROSSHEAD) {
+                crosshead = true;
             }
             slot++;
         }
         this.timeSlot = time;
+        this.extensionSlot = extension;
+        this.extensionMayStop = crosshead;
         this.delimiterWord = (delimiter & 0xFFL) * 0x0101010101010101L;
     }
 
@@ -131,6 +145,15 @@ final class DataRows {
         return rows;
     }
 
+    /** Rows with an extension value: all rows unless the extension cells stop, 0 without the channel. */
+    int extensometerPoints() {
+        return extensionSlot < 0 ? 0 : extensometerPoints < 0 ? rows : extensometerPoints;
+    }
+
+    int extensionStopLine() {
+        return extensionStopLine;
+    }
+
     int repeatedTimes() {
         return repeatedTimes;
     }
@@ -157,6 +180,10 @@ final class DataRows {
         }
         while (e > s && (b[e - 1] == ' ' || b[e - 1] == '\t')) {
             e--;
+        }
+        if (slot == extensionSlot && (s == e && extensionMayStop || extensionStopLine != 0)) {
+            extensionEnded(s == e, line, column);
+            return;
         }
         double parsed = decimalCommaAllowed && contains(b, s, e, (byte) ',')
                 ? parseWithDecimalComma(slot, b, s, e, line, column)
@@ -204,6 +231,22 @@ final class DataRows {
             scratch[i - s] = b[i] == ',' ? (byte) '.' : b[i];
         }
         return parse(slot, scratch, 0, e - s, b, s, line, column);
+    }
+
+    /**
+     * An empty extension cell in a file with a crosshead channel: the extensometer was taken off. The
+     * point gets NaN and every later extension cell must be empty too.
+     */
+    private void extensionEnded(boolean empty, int line, int column) {
+        if (!empty) {
+            throw new CurveRejected(line, column, "the extension channel resumes after it stopped on line "
+                    + extensionStopLine + "; once the extensometer is removed its cells must stay empty");
+        }
+        if (extensionStopLine == 0) {
+            extensionStopLine = line;
+            extensometerPoints = rows;
+        }
+        lists[extensionSlot].add(Double.NaN);
     }
 
     /** Equal time stamps are counted for a warning; a smaller one rejects the file. */

@@ -66,9 +66,12 @@ final class HeaderRow {
             factorOfColumn[i] = factor;
         }
         for (Channel channel : Channel.values()) {
-            if (channel.required() && !found.containsKey(channel)) {
-                throw new CurveRejected(line, 0, "the header row has no " + channel.label() + " channel; found \""
-                        + text.strip() + "\"");
+            // A crosshead-only record (no extensometer fitted) may leave the extension channel out.
+            boolean standsIn = channel == Channel.EXTENSION && found.containsKey(Channel.CROSSHEAD);
+            if (channel.required() && !found.containsKey(channel) && !standsIn) {
+                throw new CurveRejected(line, 0, "the header row has no " + channel.label() + " channel"
+                        + (channel == Channel.EXTENSION ? " (nor a crosshead channel to stand in for it)" : "")
+                        + "; found \"" + text.strip() + "\"");
             }
         }
         List<ChannelColumn> inColumnOrder = new ArrayList<>(found.values());

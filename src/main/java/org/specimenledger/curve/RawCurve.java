@@ -24,16 +24,19 @@ public final class RawCurve {
     private final double[] extensionMm;
     private final double[] timeS;
     private final double[] crossheadMm;
+    private final int extensometerPoints;
     private final String sha256;
     private final long byteCount;
     private final Map<String, String> metadata;
     private final List<ChannelColumn> channels;
     private final List<String> warnings;
 
-    RawCurve(double[] forceN, double[] extensionMm, double[] timeS, double[] crossheadMm, String sha256,
-            long byteCount, Map<String, String> metadata, List<ChannelColumn> channels, List<String> warnings) {
+    RawCurve(double[] forceN, double[] extensionMm, double[] timeS, double[] crossheadMm, int extensometerPoints,
+            String sha256, long byteCount, Map<String, String> metadata, List<ChannelColumn> channels,
+            List<String> warnings) {
         this.forceN = forceN;
-        this.extensionMm = extensionMm;
+        this.extensionMm = extensionMm == null ? NONE : extensionMm;
+        this.extensometerPoints = extensometerPoints;
         this.timeS = timeS == null ? NONE : timeS;
         this.crossheadMm = crossheadMm == null ? NONE : crossheadMm;
         this.sha256 = sha256;
@@ -64,7 +67,9 @@ public final class RawCurve {
     /**
      * Extensometer extension of every point.
      *
-     * @return a new array of {@link #size()} finite values in millimetres
+     * @return a new array of {@link #size()} values in millimetres, finite for the first
+     *     {@link #extensometerPoints()} and NaN after them (extensometer removed, only in a file with a
+     *     crosshead channel); an empty array for a crosshead-only file
      */
     public double[] extensionMm() {
         return extensionMm.clone();
@@ -88,6 +93,25 @@ public final class RawCurve {
      */
     public double[] crossheadMm() {
         return crossheadMm.clone();
+    }
+
+    /**
+     * How many leading points carry an extensometer value.
+     *
+     * @return {@link #size()} for a complete extension channel, fewer when its cells end (the extensometer
+     *     was removed; the crosshead continues), 0 when the file has no extension channel
+     */
+    public int extensometerPoints() {
+        return extensometerPoints;
+    }
+
+    /**
+     * Whether the file had an extension channel (a crosshead-only file has none).
+     *
+     * @return true when {@link #extensionMm()} holds {@link #size()} values
+     */
+    public boolean hasExtensometer() {
+        return extensionMm.length > 0;
     }
 
     /**

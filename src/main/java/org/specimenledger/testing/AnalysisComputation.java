@@ -3,6 +3,7 @@ package org.specimenledger.testing;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.specimenledger.analysis.AnalysisRejected;
 import org.specimenledger.analysis.CrossSectionShape;
 import org.specimenledger.analysis.CyclicAnalysis;
 import org.specimenledger.analysis.CyclicParameters;
@@ -11,6 +12,7 @@ import org.specimenledger.analysis.RoundingRule;
 import org.specimenledger.analysis.TensileAnalysis;
 import org.specimenledger.analysis.TensileParameters;
 import org.specimenledger.analysis.TensileResult;
+import org.specimenledger.analysis.TensileSpecimen;
 import org.specimenledger.analysis.UncertaintyInputs;
 import org.specimenledger.curve.RawCurve;
 import org.specimenledger.shared.RuleViolation;
@@ -56,15 +58,32 @@ final class AnalysisComputation {
             RunConditions run, List<CalibrationUsed> calibrations) {
         if (mode == TestMode.CYCLIC) {
             CyclicParameters p = cyclicParameters(parameters);
-            CyclicResult r = CyclicAnalysis.analyse(curve.forceN(), curve.extensionMm(), p);
+            CyclicResult r = cyclic(curve, p);
             List<ResultFlag> flags = ResultFlags.of(run, geometry, calibrations, null, r);
             return outcome(r.methodVersion(), p.asMap(), curve, AnalysisReports.cyclic(r), flags);
         }
         TensileParameters p = tensileParameters(parameters);
-        TensileResult r = TensileAnalysis.analyse(curve.forceN(), curve.extensionMm(),
-                curve.hasTime() ? curve.timeS() : null, geometry.tensileSpecimen(), p);
+        TensileResult r = tensile(curve, geometry.tensileSpecimen(), p);
         List<ResultFlag> flags = ResultFlags.of(run, geometry, calibrations, r, null);
         return outcome(r.methodVersion(), p.asMap(), curve, AnalysisReports.tensile(r), flags);
+    }
+
+    /**
+     * The tensile engine on every channel of a read curve: the crosshead, when the file has one, continues
+     * an extensometer that stops and stands in for a missing one.
+     */
+    static TensileResult tensile(RawCurve curve, TensileSpecimen specimen, TensileParameters p) {
+        return TensileAnalysis.analyse(curve.forceN(), curve.hasExtensometer() ? curve.extensionMm() : null,
+                curve.hasTime() ? curve.timeS() : null, curve.hasCrosshead() ? curve.crossheadMm() : null, specimen, p);
+    }
+
+    /** The cyclic engine, which needs the extensometer over the whole record. */
+    static CyclicResult cyclic(RawCurve curve, CyclicParameters p) {
+        if (curve.extensometerPoints() < curve.size()) {
+            throw new AnalysisRejected("a cyclic analysis needs the extension channel on every point; this file has "
+                    + curve.extensometerPoints() + " of " + curve.size());
+        }
+        return CyclicAnalysis.analyse(curve.forceN(), curve.extensionMm(), p);
     }
 
     /**

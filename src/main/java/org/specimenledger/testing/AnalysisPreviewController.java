@@ -7,8 +7,6 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.util.LinkedHashMap;
 import java.util.Map;
-import org.specimenledger.analysis.CyclicAnalysis;
-import org.specimenledger.analysis.TensileAnalysis;
 import org.specimenledger.analysis.TensileSpecimen;
 import org.specimenledger.curve.CurveReader;
 import org.specimenledger.curve.RawCurve;
@@ -46,9 +44,8 @@ class AnalysisPreviewController {
             raw = reader.read(in);
         }
         Map<String, Object> body = new LinkedHashMap<>(settings.isCyclic()
-                ? AnalysisReports.cyclic(CyclicAnalysis.analyse(raw.forceN(), raw.extensionMm(), settings.cyclic()))
-                : AnalysisReports.tensile(TensileAnalysis.analyse(raw.forceN(), raw.extensionMm(),
-                        raw.hasTime() ? raw.timeS() : null, geometry, settings.tensile())));
+                ? AnalysisReports.cyclic(AnalysisComputation.cyclic(raw, settings.cyclic()))
+                : AnalysisReports.tensile(AnalysisComputation.tensile(raw, geometry, settings.tensile())));
         body.put("input", AnalysisReports.input(raw));
         return body;
     }

@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.specimenledger.analysis.AnalysisWarning;
 import org.specimenledger.analysis.CyclicResult;
 import org.specimenledger.analysis.LoadingCycle;
 import org.specimenledger.analysis.PropertyResult;
@@ -75,12 +76,65 @@ final class ResultFlags {
                     + " the gauge length" + where + "; A counts only if it meets the specified minimum"
                     + " (ISO 6892-1 [S]; ASTM E8: report the location [S])", List.of("A")));
         }
+        recordFlags(r, flags);
         PropertyResult a = r.property("A");
         if (a.isDetermined() && a.reason() != null && a.reason().startsWith("from extensometer")) {
             flags.add(new ResultFlag(ResultFlag.ELONGATION_FROM_EXTENSOMETER, "A was taken from the extensometer"
                     + " record (elastic part removed), not from the broken pieces; Lu was not measured",
                     List.of("A")));
         }
+    }
+
+    /**
+     * How the record was read (toe, crosshead, loop) and what its data quality warrants, from the engine's
+     * warnings, each with the properties it concerns.
+     */
+    private static void recordFlags(TensileResult r, List<ResultFlag> flags) {
+        List<String> strainBased = new ArrayList<>();
+        List<String> fromCrosshead = new ArrayList<>();
+        r.properties().forEach((symbol, p) -> {
+            if (symbol.startsWith("Rp") || symbol.startsWith("Rt") || List.of("Ae", "Agt", "Ag", "At", "A").contains(symbol)) {
+                strainBased.add(symbol);
+            }
+            if (p.isDetermined() && p.evidence().containsKey("extensionSource")) {
+                fromCrosshead.add(symbol);
+            }
+        });
+        for (AnalysisWarning w : r.warnings()) {
+            switch (w.code()) {
+                case "TOE_COMPENSATED" -> flags.add(new ResultFlag(ResultFlag.TOE_COMPENSATED, w.message()
+                        + " (toe compensation, ASTM E8/E8M [S]; ISO 6892-1 origin correction [M])", strainBased));
+                case "EXTENSOMETER_REMOVED" -> flags.add(new ResultFlag(ResultFlag.EXTENSION_FROM_CROSSHEAD,
+                        w.message() + "; values from the crosshead carry its lower accuracy", fromCrosshead));
+                case "CROSSHEAD_ONLY" -> {
+                    List<String> all = new ArrayList<>(strainBased);
+                    all.add(0, "E");
+                    flags.add(new ResultFlag(ResultFlag.CROSSHEAD_ONLY, w.message() + "; E is "
+                            + (r.property("E").isDetermined() ? "the apparent slope of crosshead data"
+                                    : "not determinable from crosshead data"), all));
+                }
+                case "UNLOAD_RELOAD_LOOP" -> {
+                    List<String> slope = new ArrayList<>();
+                    slope.add("E");
+                    r.properties().keySet().stream().filter(k -> k.startsWith("Rp")).forEach(slope::add);
+                    flags.add(new ResultFlag(ResultFlag.UNLOAD_RELOAD_LOOP, w.message(), slope));
+                }
+                default -> {
+                    if (ResultFlag.DATA_QUALITY.contains(w.code())) {
+                        flags.add(new ResultFlag(w.code(), w.message(), qualityProperties(w.code())));
+                    }
+                }
+            }
+        }
+    }
+
+    private static List<String> qualityProperties(String code) {
+        return switch (code) {
+            case "FORCE_CLIPPED" -> List.of("Fm", "Rm");
+            case "YIELD_DROP_UNDER_SAMPLED" -> List.of("ReH");
+            case "EXTENSOMETER_FROZEN" -> List.of("Agt", "Ag", "At", "A");
+            default -> null;
+        };
     }
 
     private static void forceRange(List<CalibrationUsed> calibrations, double maxForceN, List<ResultFlag> flags) {

@@ -15,10 +15,32 @@ class TensileParametersMapTest {
     void defaultsRoundTrip() {
         Map<String, Object> m = TensileParameters.defaults().asMap();
         assertThat(TensileParameters.fromMap(m)).isEqualTo(TensileParameters.defaults());
-        assertThat(m.keySet()).startsWith("proofOffsetsPercent", "totalExtensionsPercent").endsWith("rounding");
+        assertThat(m.keySet()).startsWith("proofOffsetsPercent", "totalExtensionsPercent").contains("rounding")
+                .endsWith("machineComplianceMmPerN", "modulusFromCrosshead", "slopeFromLoop", "loopMinimumDropPercent",
+                        "extensometerFreezePoints", "yieldDropMinimumPoints");
         assertThat(m.get("yieldDropPercent")).isEqualTo(0.5);
         assertThat(m.get("uncertainty.forceClassPercent")).isEqualTo(1.0);
-        assertThat(m).hasSize(31);
+        assertThat(m).containsEntry("machineComplianceMmPerN", null);
+        assertThat(m).hasSize(37);
+    }
+
+    @Test
+    void mapStoredBeforeTheRealRecordSettingsStillReads() {
+        // tensile/1.0.0 stored 31 keys ending with "rounding"; the settings added later take their defaults
+        Map<String, Object> old = new LinkedHashMap<>(TensileParameters.defaults().asMap());
+        List.of("machineComplianceMmPerN", "modulusFromCrosshead", "slopeFromLoop", "loopMinimumDropPercent",
+                "extensometerFreezePoints", "yieldDropMinimumPoints").forEach(old::remove);
+        assertThat(old).hasSize(31);
+        assertThat(TensileParameters.fromMap(old)).isEqualTo(TensileParameters.defaults());
+    }
+
+    @Test
+    void complianceSettingRoundTrips() {
+        TensileParameters p = TensileParameters.defaults().toBuilder().machineComplianceMmPerN(2.5e-6)
+                .modulusFromCrosshead(true).slopeFromLoop(false).build();
+        assertThat(TensileParameters.fromMap(new LinkedHashMap<>(p.asMap()))).isEqualTo(p);
+        assertThatThrownBy(() -> TensileParameters.defaults().toBuilder().machineComplianceMmPerN(-1e-6).build())
+                .isInstanceOf(AnalysisRejected.class).hasMessageContaining("machineComplianceMmPerN");
     }
 
     @Test

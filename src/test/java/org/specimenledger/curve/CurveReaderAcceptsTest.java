@@ -238,4 +238,45 @@ class CurveReaderAcceptsTest {
                 new ChannelColumn(Channel.FORCE, "kip", 3),
                 new ChannelColumn(Channel.TIME, "min", 4)));
     }
+
+    @Test
+    void readsRecordWhoseExtensometerWasRemovedWhileTheCrossheadContinues() {
+        StringBuilder b = new StringBuilder("time [s],force [kN],extension [mm],crosshead [mm]\n");
+        for (int i = 0; i < 24; i++) {
+            b.append(i).append(',').append(i).append(',').append(i < 8 ? String.valueOf(0.01 * i) : " ").append(',')
+                    .append(0.25 * i).append('\n');
+        }
+        RawCurve curve = reader.read(b.toString().getBytes(StandardCharsets.UTF_8));
+
+        assertThat(curve.size()).isEqualTo(24);
+        assertThat(curve.extensometerPoints()).isEqualTo(8);
+        assertThat(curve.hasExtensometer()).isTrue();
+        assertThat(curve.extensionMm()[7]).isEqualTo(0.07);
+        assertThat(curve.extensionMm()[8]).isNaN();
+        assertThat(curve.extensionMm()[23]).isNaN();
+        assertThat(curve.crossheadMm()[23]).isEqualTo(5.75);
+        assertThat(curve.warnings()).anyMatch(w -> w.contains("extension cells end on line 10"));
+    }
+
+    @Test
+    void readsCrossheadOnlyRecord() {
+        StringBuilder b = new StringBuilder("force [N];crosshead [mm]\n");
+        for (int i = 0; i < 24; i++) {
+            b.append(i).append(';').append(i).append(",5\n");
+        }
+        RawCurve curve = reader.read(b.toString().getBytes(StandardCharsets.UTF_8));
+
+        assertThat(curve.hasExtensometer()).isFalse();
+        assertThat(curve.extensometerPoints()).isZero();
+        assertThat(curve.extensionMm()).isEmpty();
+        assertThat(curve.crossheadMm()[3]).isEqualTo(3.5);
+    }
+
+    @Test
+    void completeExtensionChannelCountsEveryPoint() {
+        RawCurve curve = reader.read(resource("synthetic-comma-kn.csv"));
+
+        assertThat(curve.extensometerPoints()).isEqualTo(curve.size());
+        assertThat(curve.hasExtensometer()).isTrue();
+    }
 }

@@ -74,8 +74,22 @@ class CurveReaderProperties {
             Statistics.label("outcome").collect("accepted");
             assertThat(curve.sha256()).isEqualTo(CurveFingerprintTest.jdkSha256(file));
             assertThat(Arrays.stream(curve.forceN()).allMatch(Double::isFinite)).isTrue();
-            assertThat(Arrays.stream(curve.extensionMm()).allMatch(Double::isFinite)).isTrue();
-            assertThat(curve.extensionMm()).hasSize(curve.size());
+            // the extension channel: complete and finite; or, only beside a crosshead channel, missing
+            // altogether or finite for its first extensometerPoints values and NaN after them
+            double[] extension = curve.extensionMm();
+            int k = curve.extensometerPoints();
+            if (!curve.hasCrosshead()) {
+                assertThat(extension).hasSize(curve.size());
+                assertThat(k).isEqualTo(curve.size());
+            }
+            if (curve.hasExtensometer()) {
+                assertThat(extension).hasSize(curve.size());
+                assertThat(Arrays.stream(extension, 0, k).allMatch(Double::isFinite)).isTrue();
+                assertThat(Arrays.stream(extension, k, extension.length).allMatch(Double::isNaN)).isTrue();
+            } else {
+                assertThat(extension).isEmpty();
+                assertThat(k).isZero();
+            }
         } catch (CurveRejected rejected) {
             Statistics.label("outcome").collect("rejected");
             assertThat(rejected.line()).isBetween(0, physicalLines);

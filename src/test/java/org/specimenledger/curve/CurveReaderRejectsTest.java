@@ -61,9 +61,30 @@ class CurveReaderRejectsTest {
 
     @Test
     void rejectsMissingExtensionChannel() {
-        CurveRejected rejected = rejection("force [N],crosshead [mm]\n0,1\n");
+        CurveRejected rejected = rejection("force [N],time [s]\n0,1\n");
 
-        assertThat(rejected.reason()).contains("no extension channel");
+        assertThat(rejected.reason()).contains("no extension channel", "nor a crosshead channel");
+    }
+
+    @Test
+    void rejectsEmptyExtensionCellWithoutCrosshead() {
+        CurveRejected rejected = rejection(HEADER + "0,1,\n");
+
+        assertThat(rejected.reason()).isEqualTo("the extension cell is empty");
+    }
+
+    @Test
+    void rejectsExtensometerThatResumesAfterItStopped() {
+        StringBuilder b = new StringBuilder("force [N],extension [mm],crosshead [mm]\n");
+        for (int i = 0; i < 12; i++) {
+            b.append(i).append(',').append(i == 5 || i == 6 ? "" : String.valueOf(0.01 * i)).append(',')
+                    .append(0.02 * i).append('\n');
+        }
+        CurveRejected rejected = rejection(b.toString());
+
+        assertThat(rejected.line()).isEqualTo(9);
+        assertThat(rejected.column()).isEqualTo(2);
+        assertThat(rejected.reason()).contains("resumes after it stopped on line 7");
     }
 
     @Test

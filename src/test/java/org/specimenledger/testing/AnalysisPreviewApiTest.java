@@ -40,7 +40,7 @@ class AnalysisPreviewApiTest extends IntegrationTest {
                 "{\"proofOffsetsPercent\": [0.2, 1.0]}");
         assertThat(r.status()).as(r.toString()).isEqualTo(200);
         JsonNode body = r.json();
-        assertThat(body.get("method").asString()).isEqualTo("tensile/1.0.0");
+        assertThat(body.get("method").asString()).isEqualTo("tensile/1.1.0");
         assertThat(body.get("yielding").asString()).isEqualTo("CONTINUOUS");
         // Ramberg & Osgood 1943 (NACA TN 902): the 0.2 % offset proof strength is sigma0.2 exactly; the file
         // rounds forces to 1 mN and 4000 points give 1.25e-5 strain per step, so 0.5 MPa is ample.

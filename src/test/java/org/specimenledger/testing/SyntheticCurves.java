@@ -36,6 +36,28 @@ public final class SyntheticCurves {
         return csv.toString().getBytes(StandardCharsets.UTF_8);
     }
 
+    /**
+     * The Ramberg–Osgood record of {@link #rambergOsgood} with a crosshead channel beside the extensometer:
+     * crosshead = extension + C·F + 20 mm (the machine as a linear spring in series, textbook model), and the
+     * extension cells left empty from the first point beyond {@code removedAtStrain} on (the extensometer
+     * taken off).
+     */
+    public static byte[] rambergOsgoodExtensometerRemoved(double eMPa, double sigma02, double n, double s0Mm2,
+            double leMm, double maxStrain, int points, double removedAtStrain, double complianceMmPerN) {
+        StringBuilder csv = new StringBuilder("# source: synthetic Ramberg-Osgood model with a crosshead channel\n");
+        csv.append("time [s],force [kN],extension [mm],crosshead [mm]\n");
+        double ratePerS = 0.00025;
+        for (int i = 0; i < points + 2; i++) {
+            double strain = i < points ? maxStrain * i / (points - 1) : maxStrain + 0.00002 * (i - points + 1);
+            double stress = i < points ? stressAt(strain, eMPa, sigma02, n) : (i == points ? 0.02 * sigma02 : 0);
+            double forceN = stress * s0Mm2;
+            String extension = strain > removedAtStrain ? "" : String.format(Locale.ROOT, "%.9f", strain * leMm);
+            csv.append(String.format(Locale.ROOT, "%.6f,%.9f,%s,%.9f%n", strain / ratePerS + (i < points ? 0 : i),
+                    forceN / 1000.0, extension, strain * leMm + complianceMmPerN * forceN + 20));
+        }
+        return csv.toString().getBytes(StandardCharsets.UTF_8);
+    }
+
     /** Loading–unloading cycles F = k·x (loading) and F = k·x²/xmax (unloading) with known loop areas. */
     public static byte[] triangleCycles(double stiffnessNPerMm, double peakMm, int cycles, int pointsPerBranch) {
         StringBuilder csv = new StringBuilder("force [N],extension [mm]\n");

@@ -57,7 +57,7 @@ class TestRunFlowTest extends TestRunTesting {
         assertThat(analysis.get("inputSha256").asString()).isEqualTo(sha);
         assertThat(analysis.get("softwareVersion").asString()).isEqualTo(build.getVersion());
         assertThat(analysis.get("softwareCommit").asString()).startsWith(git.getCommitId());
-        assertThat(analysis.get("methodVersion").asString()).isEqualTo("tensile/1.0.0");
+        assertThat(analysis.get("methodVersion").asString()).isEqualTo("tensile/1.1.0");
         assertThat(analysis.get("parameters").get("proofOffsetsPercent").get(0).asDouble()).isEqualTo(0.2);
         // the uncertainty budget takes the classes of the calibrations used: 100 kN range class 0.5, extensometer 1
         assertThat(analysis.get("parameters").get("uncertainty.forceClassPercent").asDouble()).isEqualTo(0.5);
@@ -111,7 +111,7 @@ class TestRunFlowTest extends TestRunTesting {
         assertThat(answer.get("differenceCount").asInt()).isZero();
         assertThat(answer.get("comparedValues").asLong()).isGreaterThan(100);
         assertThat(answer.get("stored").get("version").asString()).isEqualTo(build.getVersion());
-        assertThat(answer.get("replayed").get("methodVersion").asString()).isEqualTo("tensile/1.0.0");
+        assertThat(answer.get("replayed").get("methodVersion").asString()).isEqualTo("tensile/1.1.0");
 
         // 6. the ledger: one event per record written, with before and after
         JsonNode runEvents = events("test-run", id);
