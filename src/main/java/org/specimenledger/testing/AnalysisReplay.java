@@ -54,7 +54,17 @@ class AnalysisReplay {
 
     @Transactional
     ReplayView replay(UUID analysisId) {
-        AnalysisArchive.Row row = analyses.visibleRow(analysisId);
+        ReplayView view = compute(analyses.visibleRow(analysisId));
+        ledger.record("analysis.replayed", AnalysisService.ENTITY, view.analysisId(), null, null, view);
+        return view;
+    }
+
+    /**
+     * The same comparison without recording it: for reads that must not write, such as a trace. The caller
+     * has already decided that the analysis may be seen.
+     */
+    @Transactional(readOnly = true)
+    ReplayView compute(AnalysisArchive.Row row) {
         TestRun run = runs.findById(row.testRunId())
                 .orElseThrow(() -> new RecordNotFound(TestRunService.ENTITY, row.testRunId()));
         byte[] bytes = store.get(row.rawCurveId());
@@ -96,7 +106,6 @@ class AnalysisReplay {
                 new ReplayView.Software(build.version(), build.commit(), replayedMethod), comparison.comparedValues(),
                 comparison.differences().size(), listed, failure,
                 clock.instant().truncatedTo(ChronoUnit.MICROS), TestRunService.actor());
-        ledger.record("analysis.replayed", AnalysisService.ENTITY, row.id(), null, null, view);
         return view;
     }
 

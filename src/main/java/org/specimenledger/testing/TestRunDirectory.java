@@ -17,11 +17,16 @@ public class TestRunDirectory {
     private final TestRunRepository runs;
     private final TestRunService service;
     private final AnalysisArchive archive;
+    private final AnalysisReplay replay;
+    private final CurveContentStore store;
 
-    TestRunDirectory(TestRunRepository runs, TestRunService service, AnalysisArchive archive) {
+    TestRunDirectory(TestRunRepository runs, TestRunService service, AnalysisArchive archive, AnalysisReplay replay,
+            CurveContentStore store) {
         this.runs = runs;
         this.service = service;
         this.archive = archive;
+        this.replay = replay;
+        this.store = store;
     }
 
     /** A specimen's valid test run with its current analysis, when both exist. */
@@ -62,5 +67,21 @@ public class TestRunDirectory {
     public Optional<ReportedResult> reportedResultOf(UUID specimenId) {
         return validRunOf(specimenId).flatMap(run -> currentAnalysisOf(run.id())
                 .map(analysis -> new ReportedResult(run, analysis)));
+    }
+
+    /**
+     * Recomputes a stored analysis from its stored bytes and parameters and compares bit for bit, like
+     * {@code POST /analyses/{id}/replay}, but records nothing: for reads (trace, audit bundle) that must not
+     * grow the ledger. Empty for an unknown analysis.
+     */
+    @Transactional(readOnly = true)
+    public Optional<ReplayView> replayWithoutRecording(UUID analysisId) {
+        return analysisId == null ? Optional.empty() : archive.find(analysisId).map(replay::compute);
+    }
+
+    /** The stored bytes of a raw curve, exactly as uploaded. */
+    @Transactional(readOnly = true)
+    public byte[] rawCurveBytes(UUID rawCurveId) {
+        return store.get(rawCurveId);
     }
 }
