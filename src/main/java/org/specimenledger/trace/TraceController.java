@@ -5,6 +5,7 @@ import io.swagger.v3.oas.annotations.tags.Tag;
 import java.util.List;
 import java.util.UUID;
 import org.specimenledger.shared.Access;
+import org.specimenledger.shared.RuleViolation;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.MediaType;
@@ -13,6 +14,7 @@ import org.springframework.security.access.prepost.PreAuthorize;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 import org.springframework.web.servlet.mvc.method.annotation.StreamingResponseBody;
 
@@ -26,6 +28,7 @@ import org.springframework.web.servlet.mvc.method.annotation.StreamingResponseBo
 @Tag(name = "trace")
 class TraceController {
 
+    static final int MAX_LINES = 100;
     static final MediaType ZIP = MediaType.parseMediaType("application/zip");
 
     private final TraceService traces;
@@ -42,6 +45,18 @@ class TraceController {
             + "calibrations, with the ledger events of each and whether a replay reproduces it (records no event)")
     TraceView analysis(@PathVariable UUID id) {
         return traces.trace(List.of(new TraceLine("analysis " + id, id)), TraceRoot.NONE);
+    }
+
+    @GetMapping("/analyses")
+    @PreAuthorize(Access.ANY_SIGNED_IN)
+    @Operation(summary = "Trace several analysis runs at once (?id=…&id=…, 1 to " + MAX_LINES + "), one line each")
+    TraceView analyses(@RequestParam(name = "id", required = false) List<UUID> ids) {
+        if (ids == null || ids.isEmpty() || ids.size() > MAX_LINES) {
+            throw new RuleViolation("id", "give between 1 and " + MAX_LINES + " analysis ids as ?id=…, was "
+                    + (ids == null ? 0 : ids.size()));
+        }
+        return traces.trace(ids.stream().distinct().map(id -> new TraceLine("analysis " + id, id)).toList(),
+                TraceRoot.NONE);
     }
 
     @GetMapping("/tests/{id}")

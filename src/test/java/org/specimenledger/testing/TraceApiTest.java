@@ -96,6 +96,17 @@ class TraceApiTest extends TestRunTesting {
         assertThat(byAnalysis.status()).isEqualTo(200);
         assertThat(byAnalysis.json().get("lines").get(0).get("testRun").get("record").get("id").asString())
                 .isEqualTo(run);
+
+        // several lines at once, as a certificate trace will ask (a repeated id is one line)
+        TestRunFixtures.Bench second = bench();
+        String secondRun = register(second);
+        String secondAnalysis = uploaded(secondRun, TestRunFixtures.curve(second)).get("analysis").get("id").asString();
+        Api.Response both = as(TestAccounts.AUDITOR).get("/api/v1/trace/analyses?id=" + analysis + "&id="
+                + secondAnalysis + "&id=" + analysis);
+        assertThat(both.status()).as(both.toString()).isEqualTo(200);
+        assertThat(both.json().get("lines")).hasSize(2);
+        assertThat(both.json().get("lines").get(1).get("specimen").get("record").get("id").asString())
+                .isEqualTo(second.specimenId());
     }
 
     @Test
@@ -131,5 +142,13 @@ class TraceApiTest extends TestRunTesting {
         assertThat(unknown.status()).isEqualTo(404);
         assertThat(unknown.contentType()).startsWith("application/problem+json");
         assertThat(as(TestAccounts.AUDITOR).get("/api/v1/trace/tests/not-a-uuid").status()).isEqualTo(400);
+        Api.Response none = as(TestAccounts.AUDITOR).get("/api/v1/trace/analyses");
+        assertThat(none.status()).as(none.toString()).isEqualTo(422);
+        assertThat(none.body()).contains("between 1 and 100");
+        StringBuilder many = new StringBuilder("/api/v1/trace/analyses?id=" + java.util.UUID.randomUUID());
+        for (int i = 0; i < 100; i++) {
+            many.append("&id=").append(java.util.UUID.randomUUID());
+        }
+        assertThat(as(TestAccounts.AUDITOR).get(many.toString()).status()).isEqualTo(422);
     }
 }
