@@ -76,7 +76,7 @@ public class TestRunDirectory {
      */
     @Transactional(readOnly = true)
     public Optional<ReplayView> replayWithoutRecording(UUID analysisId) {
-        return analysisId == null ? Optional.empty() : archive.find(analysisId).map(replay::compute);
+        return analysisId == null ? Optional.empty() : archive.find(analysisId).map(replay::remembered);
     }
 
     /** The stored bytes of a raw curve, exactly as uploaded. */

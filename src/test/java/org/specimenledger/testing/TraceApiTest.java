@@ -109,6 +109,36 @@ class TraceApiTest extends TestRunTesting {
                 .isEqualTo(second.specimenId());
     }
 
+    /**
+     * The trace remembers replay outcomes by their exact inputs; a stored value changed behind the
+     * application's back (as superuser, trigger disabled) is a new input and must show as not reproduced.
+     */
+    @Test
+    void aTamperedStoredResultIsNotReproducedEvenAfterAnEarlierTrace() {
+        TestRunFixtures.Bench b = bench();
+        String run = register(b);
+        String analysis = uploaded(run, TestRunFixtures.curve(b)).get("analysis").get("id").asString();
+        String path = "/api/v1/trace/analyses/" + analysis;
+        assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
+        String original = jdbc.sql("SELECT results::text FROM analysis_run WHERE id = ?::uuid").param(analysis)
+                .query(String.class).single();
+        jdbc.sql("ALTER TABLE analysis_run DISABLE TRIGGER analysis_run_append_only").update();
+        try {
+            jdbc.sql("""
+                    UPDATE analysis_run SET results = jsonb_set(results, '{properties,Rm,value}',
+                        to_jsonb((results #>> '{properties,Rm,value}')::numeric + 1)) WHERE id = ?::uuid""")
+                    .param(analysis).update();
+            JsonNode replay = manager().get(path).json().get("lines").get(0).get("replay");
+            assertThat(replay.get("identical").asBoolean()).as(replay.toString()).isFalse();
+            assertThat(replay.get("differences").toString()).contains("/results/properties/Rm/value");
+        } finally {
+            jdbc.sql("UPDATE analysis_run SET results = ?::jsonb WHERE id = ?::uuid").params(original, analysis)
+                    .update();
+            jdbc.sql("ALTER TABLE analysis_run ENABLE TRIGGER analysis_run_append_only").update();
+        }
+        assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
+    }
+
     @Test
     void customersTraceOnlyTheirOwnOrganisationsRecords() {
         TestRunFixtures.Bench own = bench();
