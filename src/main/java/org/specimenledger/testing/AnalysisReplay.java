@@ -54,11 +54,59 @@ class AnalysisReplay {
 
     @Transactional
     ReplayView replay(UUID analysisId) {
-        AnalysisArchive.Row row = analyses.visibleRow(analysisId);
+        ReplayView view = compute(analyses.visibleRow(analysisId));
+        ledger.record("analysis.replayed", AnalysisService.ENTITY, view.analysisId(), null, null, view);
+        return view;
+    }
+
+    /**
+     * The same comparison without recording it: for reads that must not write, such as a trace. The caller
+     * has already decided that the analysis may be seen.
+     */
+    @Transactional(readOnly = true)
+    ReplayView compute(AnalysisArchive.Row row) {
         TestRun run = runs.findById(row.testRunId())
                 .orElseThrow(() -> new RecordNotFound(TestRunService.ENTITY, row.testRunId()));
         byte[] bytes = store.get(row.rawCurveId());
-        boolean fingerprint = sha256(bytes).equals(row.inputSha256());
+        String bytesSha256 = sha256(bytes);
+        boolean fingerprint = bytesSha256.equals(row.inputSha256());
+        return compute(row, run, bytes, fingerprint);
+    }
+
+    /**
+     * The replay of a row whose stored bytes were just read and hashed, remembered by everything it depends
+     * on: the analysis id, the SHA-256 of the bytes as read now, and the SHA-256 of every stored input of the
+     * computation as read now (reader output, results, flags, parameters, method version, mode, geometry and
+     * calibration snapshots, run conditions). The running software is fixed for the life of the process and
+     * the computation is deterministic, so a remembered answer is the answer a recomputation would give; a
+     * changed byte anywhere (a tampered row) is a different key and is recomputed. Only the time and the
+     * person asking are taken fresh. Used for reads (traces), never for the recorded replay.
+     */
+    ReplayView remembered(AnalysisArchive.Row row) {
+        TestRun run = runs.findById(row.testRunId())
+                .orElseThrow(() -> new RecordNotFound(TestRunService.ENTITY, row.testRunId()));
+        byte[] bytes = store.get(row.rawCurveId());
+        String bytesSha256 = sha256(bytes);
+        String inputs = sha256(String.join("\u0000", row.input(), row.results(), row.flags(), row.parameters(),
+                row.methodVersion(), row.mode().name(), String.valueOf(row.geometryUsed()),
+                String.valueOf(row.calibrationList()), String.valueOf(RunConditions.of(run)))
+                .getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        ReplayView known = outcomes.get(new OutcomeKey(row.id(), bytesSha256, inputs),
+                k -> compute(row, run, bytes, bytesSha256.equals(row.inputSha256())));
+        return new ReplayView(known.analysisId(), known.testRunId(), known.identical(), known.inputSha256(),
+                known.inputFingerprintMatches(), known.stored(), known.replayed(), known.comparedValues(),
+                known.differenceCount(), known.differences(), known.failure(),
+                clock.instant().truncatedTo(ChronoUnit.MICROS), TestRunService.actor());
+    }
+
+    private record OutcomeKey(UUID analysisId, String bytesSha256, String inputsSha256) {
+    }
+
+    /** At most a few thousand small answers; an entry is only ever a shortcut, never the source of truth. */
+    private final com.github.benmanes.caffeine.cache.Cache<OutcomeKey, ReplayView> outcomes =
+            com.github.benmanes.caffeine.cache.Caffeine.newBuilder().maximumSize(5_000).build();
+
+    private ReplayView compute(AnalysisArchive.Row row, TestRun run, byte[] bytes, boolean fingerprint) {
 
         ObjectNode stored = StoredJson.MAPPER.createObjectNode();
         stored.set("input", StoredJson.parse(row.input()));
@@ -96,7 +144,6 @@ class AnalysisReplay {
                 new ReplayView.Software(build.version(), build.commit(), replayedMethod), comparison.comparedValues(),
                 comparison.differences().size(), listed, failure,
                 clock.instant().truncatedTo(ChronoUnit.MICROS), TestRunService.actor());
-        ledger.record("analysis.replayed", AnalysisService.ENTITY, row.id(), null, null, view);
         return view;
     }
 

@@ -21,15 +21,17 @@ public class TestRunDirectory {
     private final CurveFileRepository files;
     private final CurveContentStore contents;
     private final CurveSettings curveSettings;
+    private final AnalysisReplay replay;
 
     TestRunDirectory(TestRunRepository runs, TestRunService service, AnalysisArchive archive,
-            CurveFileRepository files, CurveContentStore contents, CurveSettings curveSettings) {
+            CurveFileRepository files, CurveContentStore contents, CurveSettings curveSettings, AnalysisReplay replay) {
         this.runs = runs;
         this.service = service;
         this.archive = archive;
         this.files = files;
         this.contents = contents;
         this.curveSettings = curveSettings;
+        this.replay = replay;
     }
 
     /** A run's raw curve read again from its stored bytes (for drawing it), when uploaded. */
@@ -76,5 +78,21 @@ public class TestRunDirectory {
     public Optional<ReportedResult> reportedResultOf(UUID specimenId) {
         return validRunOf(specimenId).flatMap(run -> currentAnalysisOf(run.id())
                 .map(analysis -> new ReportedResult(run, analysis)));
+    }
+
+    /**
+     * Recomputes a stored analysis from its stored bytes and parameters and compares bit for bit, like
+     * {@code POST /analyses/{id}/replay}, but records nothing: for reads (trace, audit bundle) that must not
+     * grow the ledger. Empty for an unknown analysis.
+     */
+    @Transactional(readOnly = true)
+    public Optional<ReplayView> replayWithoutRecording(UUID analysisId) {
+        return analysisId == null ? Optional.empty() : archive.find(analysisId).map(replay::remembered);
+    }
+
+    /** The stored bytes of a raw curve, exactly as uploaded. */
+    @Transactional(readOnly = true)
+    public byte[] rawCurveBytes(UUID rawCurveId) {
+        return contents.get(rawCurveId);
     }
 }

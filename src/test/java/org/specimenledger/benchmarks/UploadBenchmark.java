@@ -48,7 +48,7 @@ public final class UploadBenchmark {
     private final String base;
     private final String auth;
 
-    private UploadBenchmark(String base, String user, String password) {
+    UploadBenchmark(String base, String user, String password) {
         this.base = base;
         this.auth = "Basic " + Base64.getEncoder().encodeToString((user + ":" + password).getBytes(StandardCharsets.UTF_8));
     }
@@ -120,7 +120,7 @@ public final class UploadBenchmark {
         return out.toByteArray();
     }
 
-    private Map<String, String> bench() throws Exception {
+    Map<String, String> bench() throws Exception {
         String suffix = UUID.randomUUID().toString().substring(0, 8);
         String customer = JSON.readTree(send(get("/api/v1/customers")).body()).get(0).get("id").asString();
         String order = post("/api/v1/customers/" + customer + "/orders", Map.of("purchaseOrder", "BENCH-" + suffix,
@@ -149,7 +149,7 @@ public final class UploadBenchmark {
         return Map.of("order", order, "heat", heat, "cell", cell, "machine", machine, "ext", ext);
     }
 
-    private String testRun(Map<String, String> bench) throws Exception {
+    String testRun(Map<String, String> bench) throws Exception {
         String specimen = post("/api/v1/specimens", Map.of("labIdentifier", "BENCH-" + UUID.randomUUID(),
                 "heatId", bench.get("heat"), "orderId", bench.get("order"), "orientation", "LONGITUDINAL",
                 "shape", "FLAT", "readings", Map.of("a", List.of(4), "b", List.of(25)),
@@ -176,7 +176,7 @@ public final class UploadBenchmark {
         return JSON.readTree(r.body()).get("id").asString();
     }
 
-    private HttpResponse<String> send(HttpRequest.Builder request) throws Exception {
+    HttpResponse<String> send(HttpRequest.Builder request) throws Exception {
         return HTTP.send(request.header("Authorization", auth).build(), HttpResponse.BodyHandlers.ofString());
     }
 
