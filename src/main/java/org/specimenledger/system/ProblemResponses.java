@@ -27,6 +27,7 @@ import org.springframework.web.bind.annotation.RestControllerAdvice;
 import org.springframework.web.context.request.WebRequest;
 import org.springframework.web.method.annotation.HandlerMethodValidationException;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
+import org.springframework.web.multipart.MultipartException;
 import org.springframework.web.servlet.mvc.method.annotation.ResponseEntityExceptionHandler;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.exc.InvalidFormatException;
@@ -111,6 +112,14 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
                 List.of(new FieldIssue(e.getName(), detail)));
     }
 
+    /** A multipart body that cannot be parsed (broken boundary, a control character in a part header). */
+    @ExceptionHandler(MultipartException.class)
+    ProblemDetail malformedMultipart(MultipartException e) {
+        log.info("Malformed multipart request: {}", e.getMessage());
+        return problem(HttpStatus.BAD_REQUEST, "malformed", "Malformed request",
+                "the multipart body could not be read; check the boundary and each part's headers and file name");
+    }
+
     @ExceptionHandler(AccessDeniedException.class)
     ProblemDetail accessDenied(AccessDeniedException e) {
         return problem(HttpStatus.FORBIDDEN, "forbidden", "Not allowed for your role",
@@ -162,6 +171,14 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
     @Override
     protected ResponseEntity<Object> handleHttpMessageNotReadable(HttpMessageNotReadableException ex,
             HttpHeaders headers, HttpStatusCode status, WebRequest request) {
+        for (Throwable t = ex; t != null; t = t.getCause()) {
+            if (t instanceof RequestLimits.BodyTooLarge tooLarge) {
+                ProblemDetail body = problem(HttpStatus.CONTENT_TOO_LARGE, "body-too-large", "Request body too large",
+                        tooLarge.getMessage());
+                body.setProperty("limitBytes", tooLarge.limitBytes);
+                return ResponseEntity.status(HttpStatus.CONTENT_TOO_LARGE).headers(headers).body(body);
+            }
+        }
         String pointer = "";
         String detail = "the request body is not valid JSON";
         Throwable cause = ex.getCause();
@@ -174,6 +191,9 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
                         + enumHint(ife.getTargetType());
             } else if (!je.getPath().isEmpty()) {
                 detail = "wrong type or shape at " + pointer;
+            } else if (cause instanceof tools.jackson.databind.exc.MismatchedInputException) {
+                // the message would name our Java types; say what the client can act on instead
+                detail = "the body must be a JSON object with the documented fields";
             } else {
                 detail = "malformed JSON: " + shorten(je.getOriginalMessage());
             }
@@ -188,8 +208,8 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
     @Override
     protected ResponseEntity<Object> createResponseEntity(Object body, HttpHeaders headers,
             HttpStatusCode statusCode, WebRequest request) {
-        if (body instanceof ProblemDetail problem && problem.getType() != null
-                && "about:blank".equals(problem.getType().toString())) {
+        if (body instanceof ProblemDetail problem && (problem.getType() == null
+                || "about:blank".equals(problem.getType().toString()))) {
             problem.setType(URI.create(TYPE_PREFIX + "http-" + statusCode.value()));
         }
         return super.createResponseEntity(body, headers, statusCode, request);

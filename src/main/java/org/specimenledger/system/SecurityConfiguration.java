@@ -37,11 +37,15 @@ class SecurityConfiguration {
      * be upgraded later. The work factor is a setting: tests lower it to stay fast.
      */
     @Bean
-    PasswordEncoder passwordEncoder(@Value("${ledger.password-hash-strength:11}") int strength) {
+    PasswordEncoder passwordEncoder(@Value("${ledger.password-hash-strength:11}") int strength,
+            @Value("${ledger.password-checks.remember-for:PT5M}") java.time.Duration rememberFor,
+            @Value("${ledger.password-checks.remember-at-most:10000}") long rememberAtMost) {
         DelegatingPasswordEncoder encoder = new DelegatingPasswordEncoder("bcrypt",
                 Map.of("bcrypt", new BCryptPasswordEncoder(strength)));
         encoder.setDefaultPasswordEncoderForMatches(PasswordEncoderFactories.createDelegatingPasswordEncoder());
-        return encoder;
+        // HTTP Basic sends the password with every request; bcrypt on each would cap the API at a few dozen
+        // requests per second per core. A matched check is remembered briefly (see RememberedPasswordChecks).
+        return new RememberedPasswordChecks(encoder, rememberFor, rememberAtMost);
     }
 
     @Bean
