@@ -42,6 +42,10 @@ class DatabaseConfiguration {
         // Fail fast at start rather than at the first request, but survive a database restart later.
         config.setInitializationFailTimeout(30_000);
         config.setConnectionTimeout(10_000);
+        // After a database restart every pooled connection is dead: test idle ones every 30 s and on borrow
+        // (Hikari checks a connection idle for more than half a second), so the pool heals without a restart.
+        config.setKeepaliveTime(30_000);
+        config.setValidationTimeout(3_000);
         return new HikariDataSource(config);
     }
 

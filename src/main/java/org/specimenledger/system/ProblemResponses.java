@@ -135,11 +135,52 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
     }
 
     @ExceptionHandler(Exception.class)
-    ProblemDetail unexpected(Exception e) {
+    ResponseEntity<ProblemDetail> unexpected(Exception e) {
+        if (databaseUnreachable(e)) {
+            // not our bug and not the client's: the database is restarting or the network to it is down.
+            // Nothing was stored (the transaction did not commit); the client may safely send it again.
+            log.warn("Database unreachable: {}", e.getMessage());
+            return ResponseEntity.status(HttpStatus.SERVICE_UNAVAILABLE).header(HttpHeaders.RETRY_AFTER, "5")
+                    .body(problem(HttpStatus.SERVICE_UNAVAILABLE, "unavailable", "Temporarily unavailable",
+                            "the database cannot be reached just now; nothing was stored; try again in a few seconds"));
+        }
         log.error("Unexpected failure", e);
-        return problem(HttpStatus.INTERNAL_SERVER_ERROR, "internal", "Internal error",
-                "the service failed; the failure is logged");
+        return ResponseEntity.status(HttpStatus.INTERNAL_SERVER_ERROR).body(problem(HttpStatus.INTERNAL_SERVER_ERROR,
+                "internal", "Internal error", "the service failed; the failure is logged"));
     }
+
+    /**
+     * A lost or refused database connection: Spring's resource-failure exceptions, JDBC's connection
+     * exception types, the pool's "Connection is closed", or anywhere in the cause chain a SQL state of class
+     * 08 (connection exception) or 57P (operator intervention: the server is shutting down or restarting).
+     */
+    static boolean databaseUnreachable(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof org.springframework.dao.DataAccessResourceFailureException
+                    || t instanceof org.springframework.transaction.CannotCreateTransactionException
+                    || t instanceof java.net.ConnectException) {
+                return true;
+            }
+            if (t instanceof java.sql.SQLTransientConnectionException
+                    || t instanceof java.sql.SQLNonTransientConnectionException
+                    || t instanceof java.sql.SQLRecoverableException) {
+                return true;
+            }
+            if (t instanceof java.sql.SQLException sql && sql.getSQLState() != null
+                    && (sql.getSQLState().startsWith("08") || sql.getSQLState().startsWith("57P"))) {
+                return true;
+            }
+            // the pool's answer for a connection the server dropped mid-transaction (rolling back on it fails)
+            if (t instanceof java.sql.SQLException sql && "Connection is closed".equals(sql.getMessage())) {
+                return true;
+            }
+            if (t.getCause() == t) {
+                break;
+            }
+        }
+        return false;
+    }
+
 
     @Override
     protected ResponseEntity<Object> handleMethodArgumentNotValid(MethodArgumentNotValidException ex,

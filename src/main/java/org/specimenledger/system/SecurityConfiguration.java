@@ -52,9 +52,17 @@ class SecurityConfiguration {
     SecurityFilterChain apiSecurity(HttpSecurity http, JsonMapper json) throws Exception {
         http.csrf(csrf -> csrf.disable())
                 .sessionManagement(s -> s.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
-                .httpBasic(basic -> basic.realmName(REALM).authenticationEntryPoint((request, response, e) ->
-                        write(json, response, HttpStatus.UNAUTHORIZED, "unauthenticated", "Sign-in required",
-                                "sign in with HTTP Basic credentials", true)))
+                .httpBasic(basic -> basic.realmName(REALM).authenticationEntryPoint((request, response, e) -> {
+                    if (ProblemResponses.databaseUnreachable(e)) {
+                        // the account could not be read: not a wrong password, so not a 401
+                        response.setHeader("Retry-After", "5");
+                        write(json, response, HttpStatus.SERVICE_UNAVAILABLE, "unavailable", "Temporarily unavailable",
+                                "the database cannot be reached just now; try again in a few seconds", false);
+                        return;
+                    }
+                    write(json, response, HttpStatus.UNAUTHORIZED, "unauthenticated", "Sign-in required",
+                            "sign in with HTTP Basic credentials", true);
+                }))
                 .exceptionHandling(x -> x
                         .authenticationEntryPoint((request, response, e) ->
                                 write(json, response, HttpStatus.UNAUTHORIZED, "unauthenticated", "Sign-in required",

@@ -30,14 +30,31 @@ final class LabWorkload {
     final AtomicLong uploads = new AtomicLong();
     final AtomicLong refusals = new AtomicLong();
     final List<String> serverErrors = new CopyOnWriteArrayList<>();
+    /** 503 answers: the database was away; allowed while it is, and nothing may be stored by them. */
+    final AtomicLong unavailable = new AtomicLong();
 
     /** One technician's loop until {@code stop} is set or the service stops answering. */
     void technician(int port, AtomicBoolean stop) {
+        technician(port, stop, false);
+    }
+
+    /** With {@code retryable}, a failed set-up is tried again (the database restarts, the service stays). */
+    void technician(int port, AtomicBoolean stop, boolean retryable) {
         Api tech = new Api.Signed(port, TECHNICIAN, PASSWORD).api();
         Api manager = new Api.Signed(port, MANAGER, PASSWORD).api();
         try {
-            String customer = manager.get("/api/v1/customers").json().get(0).get("id").asString();
-            ReliabilityBench bench = ReliabilityBench.make(tech, manager, customer);
+            ReliabilityBench bench = null;
+            while (bench == null && !stop.get()) {
+                try {
+                    String customer = manager.get("/api/v1/customers").json().get(0).get("id").asString();
+                    bench = ReliabilityBench.make(tech, manager, customer);
+                } catch (RuntimeException e) {
+                    if (!retryable) {
+                        throw e;
+                    }
+                    Thread.sleep(500); // the database is away; the bench is set up again when it is back
+                }
+            }
             boolean first = true;
             while (!stop.get()) {
                 Map<String, Object> registration = new java.util.HashMap<>(bench.registration());
@@ -66,11 +83,15 @@ final class LabWorkload {
             }
         } catch (RuntimeException e) {
             // the service went away under us: that is the point of the exercise
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
         }
     }
 
     private boolean note(Api.Response r, String table, String id) {
-        if (r.status() >= 500) {
+        if (r.status() == 503) {
+            unavailable.incrementAndGet();
+        } else if (r.status() >= 500) {
             serverErrors.add(r.toString());
         }
         if (r.status() / 100 == 2 && table != null && id != null) {
