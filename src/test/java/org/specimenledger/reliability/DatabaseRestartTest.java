@@ -96,6 +96,16 @@ class DatabaseRestartTest {
             assertThat(work.uploads.get()).isPositive();
         } finally {
             pg.close();
+            deleteTree(pgData); // 40 MB of database files; the service log stays for a failed run
+        }
+    }
+
+    private static void deleteTree(Path root) throws java.io.IOException {
+        if (!Files.exists(root)) {
+            return;
+        }
+        try (var paths = Files.walk(root)) {
+            paths.sorted(java.util.Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
         }
     }
 

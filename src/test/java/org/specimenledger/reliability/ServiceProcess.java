@@ -26,6 +26,20 @@ final class ServiceProcess implements AutoCloseable {
     private final Path log;
     private Process process;
     private int starts;
+    private int hashStrength = 4;
+    private final java.util.Map<String, String> environment = new java.util.HashMap<>();
+
+    /** bcrypt work factor of the started service: 4 (fast) for the crash tests, the production 11 for load. */
+    ServiceProcess hashStrength(int strength) {
+        this.hashStrength = strength;
+        return this;
+    }
+
+    /** One more environment variable for the started service. */
+    ServiceProcess env(String name, String value) {
+        environment.put(name, value);
+        return this;
+    }
 
     ServiceProcess(Path dataDir, String databaseUrl) throws IOException {
         this.dataDir = dataDir;
@@ -49,7 +63,7 @@ final class ServiceProcess implements AutoCloseable {
         command.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
         command.add("-Xmx512m");
         command.add("-XX:TieredStopAtLevel=1");
-        command.add("-Dledger.password-hash-strength=4");
+        command.add("-Dledger.password-hash-strength=" + hashStrength);
         String jar = System.getProperty("reliability.jar");
         if (jar != null && !jar.isBlank()) {
             command.add("-jar");
@@ -66,6 +80,7 @@ final class ServiceProcess implements AutoCloseable {
         builder.environment().put("LEDGER_DB_USER", "");
         builder.environment().put("LEDGER_DB_PASSWORD", "");
         builder.environment().put("LEDGER_DEMO", "on");
+        builder.environment().putAll(environment);
         builder.redirectErrorStream(true);
         builder.redirectOutput(ProcessBuilder.Redirect.appendTo(log.toFile()));
         Files.writeString(log, "\n===== start " + (++starts) + " =====\n", java.nio.file.StandardOpenOption.CREATE,
