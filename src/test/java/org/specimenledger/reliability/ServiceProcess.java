@@ -15,7 +15,7 @@ import java.util.List;
 /**
  * The service as a separate operating-system process, so that it can be killed as a power cut would kill it:
  * {@link Process#destroyForcibly()} sends SIGKILL on Linux (no shutdown hook, no graceful close). Started from
- * the built jar when {@code -Dreliability.jar=target/specimen-ledger.jar} names one, else from this JVM's class
+ * the built jar when {@code -Dreliability.jar=target/specimen-ledger.jar} names an existing one, else from this JVM's class
  * path with the same main class. Its own port, data folder and database; its output goes to a log file.
  */
 final class ServiceProcess implements AutoCloseable {
@@ -65,7 +65,7 @@ final class ServiceProcess implements AutoCloseable {
         command.add("-XX:TieredStopAtLevel=1");
         command.add("-Dledger.password-hash-strength=" + hashStrength);
         String jar = System.getProperty("reliability.jar");
-        if (jar != null && !jar.isBlank()) {
+        if (jar != null && !jar.isBlank() && Files.isRegularFile(Path.of(jar))) {
             command.add("-jar");
             command.add(Path.of(jar).toAbsolutePath().toString());
         } else {
