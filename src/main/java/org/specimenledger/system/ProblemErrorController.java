@@ -17,6 +17,7 @@ import org.springframework.web.bind.annotation.RestController;
  * {@code sendError} from a filter). Says the status and nothing else: never the exception, never a trace.
  */
 @RestController
+@io.swagger.v3.oas.annotations.Hidden
 class ProblemErrorController implements ErrorController {
 
     @RequestMapping("/error")

@@ -29,8 +29,8 @@ public record RequestLimitSettings(@DefaultValue("1MB") DataSize maxBody, List<R
      * @param path     path pattern (Spring {@code PathPattern} syntax, e.g. {@code /api/v1/analysis/**})
      * @param requests requests allowed per window and client, at least 1
      * @param per      length of the window
-     * @param by       what a client is: {@code address} (remote address) or {@code user} (the Basic username,
-     *     the address when there is none)
+     * @param by       what a client is: {@code address} (remote address) or {@code user} (the Basic username
+     *     at its address, so several users behind one address count apart; the address alone when there is none)
      */
     public record RateRule(String name, @DefaultValue("*") String method, String path, int requests,
             @DefaultValue("PT1M") Duration per, @DefaultValue("address") String by) {

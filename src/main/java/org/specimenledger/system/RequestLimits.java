@@ -73,8 +73,13 @@ public final class RequestLimits extends OncePerRequestFilter {
     @Override
     protected void doFilterInternal(HttpServletRequest request, HttpServletResponse response, FilterChain chain)
             throws ServletException, IOException {
-        PathContainer path = PathContainer.parsePath(request.getRequestURI().substring(
-                request.getContextPath().length()));
+        PathContainer path;
+        try {
+            path = PathContainer.parsePath(request.getRequestURI().substring(request.getContextPath().length()));
+        } catch (IllegalArgumentException e) {
+            chain.doFilter(request, response); // a path this cannot read is refused further on, as a problem
+            return;
+        }
         for (CompiledRule rule : rules) {
             if (counts(rule, request, path)) {
                 long retryAfter = overLimit(rule, request);
@@ -125,9 +130,11 @@ public final class RequestLimits extends OncePerRequestFilter {
 
     private static String clientOf(RequestLimitSettings.RateRule rule, HttpServletRequest request) {
         if ("user".equals(rule.by())) {
+            // the username is read before sign-in is checked, so anyone may send anyone's: counted together with
+            // the address, so that a stranger elsewhere cannot use up a user's allowance
             String username = basicUsername(request.getHeader(HttpHeaders.AUTHORIZATION));
             if (username != null) {
-                return "user:" + username;
+                return "user:" + username + "@" + request.getRemoteAddr();
             }
         }
         return "address:" + request.getRemoteAddr();

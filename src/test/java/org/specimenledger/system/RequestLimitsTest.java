@@ -101,12 +101,15 @@ class RequestLimitsTest {
     }
 
     @Test
-    void aRuleByUserCountsEachUsernameApartWhateverTheAddress() throws Exception {
+    void aRuleByUserCountsEachUsernameAtItsAddressApart() throws Exception {
         RequestLimits filter = limits(1000, new RequestLimitSettings.RateRule("per-user", "*", "/api/v1/**", 1,
                 Duration.ofMinutes(1), "user"));
         assertThat(run(filter, request("GET", "/api/v1/heats", null, "alice", "10.0.0.1")).getStatus()).isEqualTo(200);
-        assertThat(run(filter, request("GET", "/api/v1/heats", null, "alice", "10.0.0.9")).getStatus()).isEqualTo(429);
+        assertThat(run(filter, request("GET", "/api/v1/heats", null, "alice", "10.0.0.1")).getStatus()).isEqualTo(429);
+        // another user behind the same address has an allowance of their own
         assertThat(run(filter, request("GET", "/api/v1/heats", null, "bob", "10.0.0.1")).getStatus()).isEqualTo(200);
+        // someone elsewhere sending alice's name does not use up alice's allowance, nor alice theirs
+        assertThat(run(filter, request("GET", "/api/v1/heats", null, "alice", "10.0.0.9")).getStatus()).isEqualTo(200);
     }
 
     @Test
