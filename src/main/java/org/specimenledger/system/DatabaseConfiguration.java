@@ -24,7 +24,8 @@ class DatabaseConfiguration {
     }
 
     @Bean(destroyMethod = "close")
-    HikariDataSource dataSource(LedgerDatabaseProperties properties, EmbeddedDatabaseHolder embedded) {
+    HikariDataSource dataSource(LedgerDatabaseProperties properties, EmbeddedDatabaseHolder embedded,
+            @org.springframework.beans.factory.annotation.Value("${ledger.db.pool-size:20}") int poolSize) {
         HikariConfig config = new HikariConfig();
         config.setPoolName("ledger");
         if (properties.external()) {
@@ -38,7 +39,7 @@ class DatabaseConfiguration {
         } else {
             config.setJdbcUrl(embedded.server().jdbcUrl());
         }
-        config.setMaximumPoolSize(20);
+        config.setMaximumPoolSize(poolSize);
         // Fail fast at start rather than at the first request, but survive a database restart later.
         config.setInitializationFailTimeout(30_000);
         config.setConnectionTimeout(10_000);

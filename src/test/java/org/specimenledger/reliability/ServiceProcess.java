@@ -64,6 +64,8 @@ final class ServiceProcess implements AutoCloseable {
         command.add("-Xmx512m");
         command.add("-XX:TieredStopAtLevel=1");
         command.add("-Dledger.password-hash-strength=" + hashStrength);
+        // the machine's PostgreSQL is shared with other builds: a small pool leaves connections for them
+        command.add("-Dledger.db.pool-size=" + Integer.getInteger("reliability.pool-size", 8));
         String jar = System.getProperty("reliability.jar");
         if (jar != null && !jar.isBlank() && Files.isRegularFile(Path.of(jar))) {
             command.add("-jar");
