@@ -115,6 +115,10 @@ public final class CurveReader {
             int line = lines.lineNumber();
             if (rows != null && from < to && b[from] != '#' && b[from] != ' ' && b[from] != '\t') {
                 rows.accept(b, from, to, line, lines.lineIsAscii()); // the common case, first
+                if (rows.rows() > limits.maxPoints()) {
+                    throw new CurveRejected(line, 0, "more than " + limits.maxPoints()
+                            + " data points; the limit is " + limits.maxPoints());
+                }
             } else if (isBlank(b, from, to)) {
                 if (rows != null) {
                     firstBlankDataLine = blankDataLines++ == 0 ? line : firstBlankDataLine;
@@ -125,6 +129,10 @@ public final class CurveReader {
                             + " belong before the header");
                 }
                 rows.accept(b, from, to, line, lines.lineIsAscii());
+                if (rows.rows() > limits.maxPoints()) {
+                    throw new CurveRejected(line, 0, "more than " + limits.maxPoints()
+                            + " data points; the limit is " + limits.maxPoints());
+                }
             } else if (Preamble.isPreambleLine(b, from, to)) {
                 preamble.accept(b, from, to, line);
                 preambleLines++;

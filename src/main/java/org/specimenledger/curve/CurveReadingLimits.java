@@ -6,8 +6,10 @@ package org.specimenledger.curve;
  * @param maxBytes maximum file size in bytes, at least 1; a file with more bytes is rejected as soon
  *     as byte {@code maxBytes + 1} has been read, without reading the rest
  * @param minPoints minimum number of data rows, at least 1; fewer rows are rejected
+ * @param maxPoints maximum number of data rows, at least {@code minPoints}; the file is rejected as soon
+ *     as row {@code maxPoints + 1} is read, so a file of many tiny rows cannot fill the memory
  */
-public record CurveReadingLimits(long maxBytes, int minPoints) {
+public record CurveReadingLimits(long maxBytes, int minPoints, int maxPoints) {
 
     /** Default maximum file size: 64 MiB, room for several million three-channel rows. */
     public static final long DEFAULT_MAX_BYTES = 64L * 1024 * 1024;
@@ -15,10 +17,14 @@ public record CurveReadingLimits(long maxBytes, int minPoints) {
     /** Default minimum number of data points: fewer cannot carry an elastic fit and a plastic part. */
     public static final int DEFAULT_MIN_POINTS = 20;
 
+    /** Default maximum number of data points: above what a 64 MiB file of ordinary rows can hold. */
+    public static final int DEFAULT_MAX_POINTS = 5_000_000;
+
     /**
      * Checks the ranges.
      *
-     * @throws IllegalArgumentException if {@code maxBytes < 1} or {@code minPoints < 1}
+     * @throws IllegalArgumentException if {@code maxBytes < 1}, {@code minPoints < 1} or
+     *     {@code maxPoints < minPoints}
      */
     public CurveReadingLimits {
         if (maxBytes < 1) {
@@ -27,6 +33,20 @@ public record CurveReadingLimits(long maxBytes, int minPoints) {
         if (minPoints < 1) {
             throw new IllegalArgumentException("minPoints must be at least 1, was " + minPoints);
         }
+        if (maxPoints < minPoints) {
+            throw new IllegalArgumentException("maxPoints must be at least minPoints (" + minPoints + "), was "
+                    + maxPoints);
+        }
+    }
+
+    /**
+     * Limits with the default maximum number of points ({@value #DEFAULT_MAX_POINTS}).
+     *
+     * @param maxBytes maximum file size in bytes, at least 1
+     * @param minPoints minimum number of data rows, at least 1
+     */
+    public CurveReadingLimits(long maxBytes, int minPoints) {
+        this(maxBytes, minPoints, Math.max(minPoints, DEFAULT_MAX_POINTS));
     }
 
     /**
@@ -45,7 +65,7 @@ public record CurveReadingLimits(long maxBytes, int minPoints) {
      * @return the new limits
      */
     public CurveReadingLimits withMaxBytes(long bytes) {
-        return new CurveReadingLimits(bytes, minPoints);
+        return new CurveReadingLimits(bytes, minPoints, maxPoints);
     }
 
     /**
@@ -55,6 +75,16 @@ public record CurveReadingLimits(long maxBytes, int minPoints) {
      * @return the new limits
      */
     public CurveReadingLimits withMinPoints(int points) {
-        return new CurveReadingLimits(maxBytes, points);
+        return new CurveReadingLimits(maxBytes, points, Math.max(points, maxPoints));
+    }
+
+    /**
+     * A copy with another maximum number of data points.
+     *
+     * @param points the new maximum, at least the minimum
+     * @return the new limits
+     */
+    public CurveReadingLimits withMaxPoints(int points) {
+        return new CurveReadingLimits(maxBytes, minPoints, points);
     }
 }

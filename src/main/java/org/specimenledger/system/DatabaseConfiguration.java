@@ -24,7 +24,8 @@ class DatabaseConfiguration {
     }
 
     @Bean(destroyMethod = "close")
-    HikariDataSource dataSource(LedgerDatabaseProperties properties, EmbeddedDatabaseHolder embedded) {
+    HikariDataSource dataSource(LedgerDatabaseProperties properties, EmbeddedDatabaseHolder embedded,
+            @org.springframework.beans.factory.annotation.Value("${ledger.db.pool-size:20}") int poolSize) {
         HikariConfig config = new HikariConfig();
         config.setPoolName("ledger");
         if (properties.external()) {
@@ -38,10 +39,14 @@ class DatabaseConfiguration {
         } else {
             config.setJdbcUrl(embedded.server().jdbcUrl());
         }
-        config.setMaximumPoolSize(20);
+        config.setMaximumPoolSize(poolSize);
         // Fail fast at start rather than at the first request, but survive a database restart later.
         config.setInitializationFailTimeout(30_000);
         config.setConnectionTimeout(10_000);
+        // After a database restart every pooled connection is dead: test idle ones every 30 s and on borrow
+        // (Hikari checks a connection idle for more than half a second), so the pool heals without a restart.
+        config.setKeepaliveTime(30_000);
+        config.setValidationTimeout(3_000);
         return new HikariDataSource(config);
     }
 

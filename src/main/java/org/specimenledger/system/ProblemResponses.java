@@ -27,6 +27,7 @@ import org.springframework.web.bind.annotation.RestControllerAdvice;
 import org.springframework.web.context.request.WebRequest;
 import org.springframework.web.method.annotation.HandlerMethodValidationException;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
+import org.springframework.web.multipart.MultipartException;
 import org.springframework.web.servlet.mvc.method.annotation.ResponseEntityExceptionHandler;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.exc.InvalidFormatException;
@@ -111,6 +112,14 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
                 List.of(new FieldIssue(e.getName(), detail)));
     }
 
+    /** A multipart body that cannot be parsed (broken boundary, a control character in a part header). */
+    @ExceptionHandler(MultipartException.class)
+    ProblemDetail malformedMultipart(MultipartException e) {
+        log.info("Malformed multipart request: {}", e.getMessage());
+        return problem(HttpStatus.BAD_REQUEST, "malformed", "Malformed request",
+                "the multipart body could not be read; check the boundary and each part's headers and file name");
+    }
+
     @ExceptionHandler(AccessDeniedException.class)
     ProblemDetail accessDenied(AccessDeniedException e) {
         return problem(HttpStatus.FORBIDDEN, "forbidden", "Not allowed for your role",
@@ -126,11 +135,52 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
     }
 
     @ExceptionHandler(Exception.class)
-    ProblemDetail unexpected(Exception e) {
+    ResponseEntity<ProblemDetail> unexpected(Exception e) {
+        if (databaseUnreachable(e)) {
+            // not our bug and not the client's: the database is restarting or the network to it is down.
+            // Nothing was stored (the transaction did not commit); the client may safely send it again.
+            log.warn("Database unreachable: {}", e.getMessage());
+            return ResponseEntity.status(HttpStatus.SERVICE_UNAVAILABLE).header(HttpHeaders.RETRY_AFTER, "5")
+                    .body(problem(HttpStatus.SERVICE_UNAVAILABLE, "unavailable", "Temporarily unavailable",
+                            "the database cannot be reached just now; nothing was stored; try again in a few seconds"));
+        }
         log.error("Unexpected failure", e);
-        return problem(HttpStatus.INTERNAL_SERVER_ERROR, "internal", "Internal error",
-                "the service failed; the failure is logged");
+        return ResponseEntity.status(HttpStatus.INTERNAL_SERVER_ERROR).body(problem(HttpStatus.INTERNAL_SERVER_ERROR,
+                "internal", "Internal error", "the service failed; the failure is logged"));
     }
+
+    /**
+     * A lost or refused database connection: Spring's resource-failure exceptions, JDBC's connection
+     * exception types, the pool's "Connection is closed", or anywhere in the cause chain a SQL state of class
+     * 08 (connection exception) or 57P (operator intervention: the server is shutting down or restarting).
+     */
+    static boolean databaseUnreachable(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof org.springframework.dao.DataAccessResourceFailureException
+                    || t instanceof org.springframework.transaction.CannotCreateTransactionException
+                    || t instanceof java.net.ConnectException) {
+                return true;
+            }
+            if (t instanceof java.sql.SQLTransientConnectionException
+                    || t instanceof java.sql.SQLNonTransientConnectionException
+                    || t instanceof java.sql.SQLRecoverableException) {
+                return true;
+            }
+            if (t instanceof java.sql.SQLException sql && sql.getSQLState() != null
+                    && (sql.getSQLState().startsWith("08") || sql.getSQLState().startsWith("57P"))) {
+                return true;
+            }
+            // the pool's answer for a connection the server dropped mid-transaction (rolling back on it fails)
+            if (t instanceof java.sql.SQLException sql && "Connection is closed".equals(sql.getMessage())) {
+                return true;
+            }
+            if (t.getCause() == t) {
+                break;
+            }
+        }
+        return false;
+    }
+
 
     @Override
     protected ResponseEntity<Object> handleMethodArgumentNotValid(MethodArgumentNotValidException ex,
@@ -162,6 +212,14 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
     @Override
     protected ResponseEntity<Object> handleHttpMessageNotReadable(HttpMessageNotReadableException ex,
             HttpHeaders headers, HttpStatusCode status, WebRequest request) {
+        for (Throwable t = ex; t != null; t = t.getCause()) {
+            if (t instanceof RequestLimits.BodyTooLarge tooLarge) {
+                ProblemDetail body = problem(HttpStatus.CONTENT_TOO_LARGE, "body-too-large", "Request body too large",
+                        tooLarge.getMessage());
+                body.setProperty("limitBytes", tooLarge.limitBytes);
+                return ResponseEntity.status(HttpStatus.CONTENT_TOO_LARGE).headers(headers).body(body);
+            }
+        }
         String pointer = "";
         String detail = "the request body is not valid JSON";
         Throwable cause = ex.getCause();
@@ -174,6 +232,9 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
                         + enumHint(ife.getTargetType());
             } else if (!je.getPath().isEmpty()) {
                 detail = "wrong type or shape at " + pointer;
+            } else if (cause instanceof tools.jackson.databind.exc.MismatchedInputException) {
+                // the message would name our Java types; say what the client can act on instead
+                detail = "the body must be a JSON object with the documented fields";
             } else {
                 detail = "malformed JSON: " + shorten(je.getOriginalMessage());
             }
@@ -188,8 +249,8 @@ class ProblemResponses extends ResponseEntityExceptionHandler {
     @Override
     protected ResponseEntity<Object> createResponseEntity(Object body, HttpHeaders headers,
             HttpStatusCode statusCode, WebRequest request) {
-        if (body instanceof ProblemDetail problem && problem.getType() != null
-                && "about:blank".equals(problem.getType().toString())) {
+        if (body instanceof ProblemDetail problem && (problem.getType() == null
+                || "about:blank".equals(problem.getType().toString()))) {
             problem.setType(URI.create(TYPE_PREFIX + "http-" + statusCode.value()));
         }
         return super.createResponseEntity(body, headers, statusCode, request);

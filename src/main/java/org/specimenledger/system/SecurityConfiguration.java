@@ -37,20 +37,32 @@ class SecurityConfiguration {
      * be upgraded later. The work factor is a setting: tests lower it to stay fast.
      */
     @Bean
-    PasswordEncoder passwordEncoder(@Value("${ledger.password-hash-strength:11}") int strength) {
+    PasswordEncoder passwordEncoder(@Value("${ledger.password-hash-strength:11}") int strength,
+            @Value("${ledger.password-checks.remember-for:PT5M}") java.time.Duration rememberFor,
+            @Value("${ledger.password-checks.remember-at-most:10000}") long rememberAtMost) {
         DelegatingPasswordEncoder encoder = new DelegatingPasswordEncoder("bcrypt",
                 Map.of("bcrypt", new BCryptPasswordEncoder(strength)));
         encoder.setDefaultPasswordEncoderForMatches(PasswordEncoderFactories.createDelegatingPasswordEncoder());
-        return encoder;
+        // HTTP Basic sends the password with every request; bcrypt on each would cap the API at a few dozen
+        // requests per second per core. A matched check is remembered briefly (see RememberedPasswordChecks).
+        return new RememberedPasswordChecks(encoder, rememberFor, rememberAtMost);
     }
 
     @Bean
     SecurityFilterChain apiSecurity(HttpSecurity http, JsonMapper json) throws Exception {
         http.csrf(csrf -> csrf.disable())
                 .sessionManagement(s -> s.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
-                .httpBasic(basic -> basic.realmName(REALM).authenticationEntryPoint((request, response, e) ->
-                        write(json, response, HttpStatus.UNAUTHORIZED, "unauthenticated", "Sign-in required",
-                                "sign in with HTTP Basic credentials", true)))
+                .httpBasic(basic -> basic.realmName(REALM).authenticationEntryPoint((request, response, e) -> {
+                    if (ProblemResponses.databaseUnreachable(e)) {
+                        // the account could not be read: not a wrong password, so not a 401
+                        response.setHeader("Retry-After", "5");
+                        write(json, response, HttpStatus.SERVICE_UNAVAILABLE, "unavailable", "Temporarily unavailable",
+                                "the database cannot be reached just now; try again in a few seconds", false);
+                        return;
+                    }
+                    write(json, response, HttpStatus.UNAUTHORIZED, "unauthenticated", "Sign-in required",
+                            "sign in with HTTP Basic credentials", true);
+                }))
                 .exceptionHandling(x -> x
                         .authenticationEntryPoint((request, response, e) ->
                                 write(json, response, HttpStatus.UNAUTHORIZED, "unauthenticated", "Sign-in required",

@@ -42,8 +42,8 @@ final class AnalysisRequestParts {
         try {
             part = JSON.readValue(json, SpecimenPart.class);
         } catch (JacksonException e) {
-            throw new RuleViolation("/specimen", "the specimen part must be JSON like {\"S0\": 78.54, \"Le\": 50, "
-                    + "\"L0\": 50}: " + e.getOriginalMessage());
+            throw new RuleViolation("/specimen" + pointerOf(e), "the specimen part must be JSON like {\"S0\": 78.54, "
+                    + "\"Le\": 50, \"L0\": 50} with numbers in mm and mm²" + whereOf(e));
         }
         if (part == null) {
             throw new RuleViolation("/specimen", "the specimen part is empty");
@@ -73,8 +73,8 @@ final class AnalysisRequestParts {
         try {
             map = JSON.readValue(json, LinkedHashMap.class);
         } catch (JacksonException e) {
-            throw new RuleViolation("/parameters", "the parameters part must be a JSON object: "
-                    + e.getOriginalMessage());
+            throw new RuleViolation("/parameters" + pointerOf(e), "the parameters part must be a JSON object"
+                    + whereOf(e));
         }
         if (map == null) {
             map = new LinkedHashMap<>();
@@ -105,5 +105,29 @@ final class AnalysisRequestParts {
         if (value != null && (!Double.isFinite(value) || value <= 0)) {
             issues.add(new FieldIssue("/specimen/" + name, name + " must be a positive number, got " + value));
         }
+    }
+
+    /** The JSON Pointer of the failing value inside a part, empty for the whole part. */
+    private static String pointerOf(JacksonException e) {
+        StringBuilder sb = new StringBuilder();
+        for (JacksonException.Reference ref : e.getPath()) {
+            sb.append('/').append(ref.getPropertyName() != null ? ref.getPropertyName() : ref.getIndex());
+        }
+        return sb.toString();
+    }
+
+    /**
+     * Where the JSON broke, without the parser's own message (which names Java types): the field of a wrong
+     * value, or the line and column of a syntax error.
+     */
+    private static String whereOf(JacksonException e) {
+        if (!e.getPath().isEmpty()) {
+            return "; the value at " + pointerOf(e) + " has the wrong type or form";
+        }
+        if (e.getLocation() != null && e.getLocation().getLineNr() > 0) {
+            return "; the JSON breaks at line " + e.getLocation().getLineNr() + ", column "
+                    + e.getLocation().getColumnNr();
+        }
+        return "";
     }
 }

@@ -10,11 +10,13 @@ import org.springframework.util.unit.DataSize;
  *
  * @param maxSize   largest curve file ({@code ledger.curves.max-size}, default 64MB)
  * @param minPoints fewest data rows a curve must have (default 20)
+ * @param maxPoints most data rows a curve may have ({@code ledger.curves.max-points}, default 5,000,000)
  */
 @ConfigurationProperties("ledger.curves")
-public record CurveSettings(@DefaultValue("64MB") DataSize maxSize, @DefaultValue("20") int minPoints) {
+public record CurveSettings(@DefaultValue("64MB") DataSize maxSize, @DefaultValue("20") int minPoints,
+        @DefaultValue("5000000") int maxPoints) {
 
     public CurveReadingLimits limits() {
-        return new CurveReadingLimits(maxSize.toBytes(), minPoints);
+        return new CurveReadingLimits(maxSize.toBytes(), minPoints, maxPoints);
     }
 }

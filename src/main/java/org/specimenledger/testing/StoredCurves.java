@@ -11,6 +11,7 @@ final class StoredCurves {
 
     static RawCurve read(byte[] bytes, CurveSettings settings) {
         long limit = Math.max(settings.maxSize().toBytes(), bytes.length);
-        return new CurveReader(settings.limits().withMaxBytes(limit)).read(bytes);
+        // a stored curve was accepted under the limits of its day: a lower point limit set later must not refuse it
+        return new CurveReader(settings.limits().withMaxBytes(limit).withMaxPoints(Integer.MAX_VALUE)).read(bytes);
     }
 }

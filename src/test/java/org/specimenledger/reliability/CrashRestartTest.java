@@ -1,0 +1,67 @@
+package org.specimenledger.reliability;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+import java.util.concurrent.atomic.AtomicBoolean;
+import org.junit.jupiter.api.Test;
+import org.postgresql.ds.PGSimpleDataSource;
+
+/**
+ * Kills the service with SIGKILL at random moments while technicians register runs, upload curves and
+ * re-analyse them; after every restart the {@link Invariants} must hold: the ledger verifies, nothing is
+ * half-stored, and every acknowledged write is there. Quick mode: 3 kills. Full mode
+ * ({@code -Dreliability.full=true}): {@code reliability.kills} kills, 50 unless set.
+ */
+class CrashRestartTest {
+
+    private static final int KILLS = Integer.getInteger("reliability.kills", HostileInputTest.FULL ? 50 : 3);
+    private static final long SEED = Long.getLong("reliability.seed", 20261202L);
+
+    @Test
+    void nothingAcknowledgedIsLostAndNothingIsHalfStoredAfterSigkill() throws Exception {
+        Path dir = Files.createTempDirectory("ledger-crash");
+        Random random = new Random(SEED);
+        List<String> broken = new ArrayList<>();
+        LabWorkload work = new LabWorkload();
+        try (ScratchDatabase db = new ScratchDatabase(AdminDatabase.url(), "ledger_crash");
+                ServiceProcess service = new ServiceProcess(dir, db.url())) {
+            PGSimpleDataSource ds = db.dataSource();
+            for (int kill = 0; kill <= KILLS; kill++) {
+                service.start(Duration.ofMinutes(3));
+                for (String p : Invariants.check(ds, work.acknowledged)) {
+                    broken.add("after restart " + kill + ": " + p);
+                }
+                if (kill == KILLS) {
+                    break;
+                }
+                AtomicBoolean stop = new AtomicBoolean();
+                List<Thread> workers = new ArrayList<>();
+                for (int w = 0; w < 2; w++) {
+                    Thread t = new Thread(() -> work.technician(service.port(), stop), "technician-" + w);
+                    t.start();
+                    workers.add(t);
+                }
+                // a random moment: while benches are set up, during uploads, or deep into the run
+                Thread.sleep(1500 + random.nextInt(6000));
+                service.kill();
+                stop.set(true);
+                for (Thread t : workers) {
+                    t.join(30_000);
+                }
+            }
+            System.out.printf("[reliability] crash and restart: %d SIGKILLs, %d uploads acknowledged, %d writes "
+                    + "acknowledged in all, %d ledger events, %d server errors, %d broken invariants%n", KILLS,
+                    work.uploads.get(), work.acknowledgedCount(), Invariants.events(ds), work.serverErrors.size(),
+                    broken.size());
+        }
+        assertThat(broken).as("invariants after SIGKILL and restart").isEmpty();
+        assertThat(work.serverErrors).as("5xx answers while running").isEmpty();
+        assertThat(work.uploads.get()).as("uploads acknowledged between kills").isPositive();
+    }
+}
