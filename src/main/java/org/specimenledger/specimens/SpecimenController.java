@@ -12,7 +12,6 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.PutMapping;
 import org.springframework.web.bind.annotation.RequestBody;
-import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.ResponseStatus;
 import org.springframework.web.bind.annotation.RestController;
@@ -22,16 +21,42 @@ import org.springframework.web.bind.annotation.RestController;
  * only the specimens of their own organisation's orders.
  */
 @RestController
-@RequestMapping("/api/v1/specimens")
 class SpecimenController {
 
     private final SpecimenService service;
+    private final SpecimenImport sheets;
 
-    SpecimenController(SpecimenService service) {
+    SpecimenController(SpecimenService service, SpecimenImport sheets) {
         this.service = service;
+        this.sheets = sheets;
     }
 
-    @PostMapping
+    /** Import files larger than this are refused before they are read: 2,000 rows fit in far less. */
+    static final long MAX_SHEET_BYTES = 4L * 1024 * 1024;
+
+    @PostMapping(path = "/api/v1/orders/{orderId}/specimens/import", consumes = {"text/csv", "application/csv"})
+    @ResponseStatus(HttpStatus.CREATED)
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Register all specimens of an order from one CSV file (columns: mark, heat, orientation, "
+            + "shape, position, diameter, thickness, width, outer_diameter, area, area_method, k, l0, round_l0, "
+            + "le, lc, note); every row is checked first, all problems are reported at once with /rows/{row}/{column} "
+            + "and nothing is stored unless every row is valid; one ledger event per specimen")
+    SpecimenImport.Imported importSheet(@PathVariable UUID orderId, jakarta.servlet.http.HttpServletRequest request)
+            throws java.io.IOException {
+        long announced = request.getContentLengthLong();
+        if (announced > MAX_SHEET_BYTES) {
+            throw new org.specimenledger.shared.RuleViolation("/", "an import file may have at most " + MAX_SHEET_BYTES
+                    + " bytes, this one announces " + announced);
+        }
+        byte[] bytes = request.getInputStream().readNBytes((int) MAX_SHEET_BYTES + 1);
+        if (bytes.length > MAX_SHEET_BYTES) {
+            throw new org.specimenledger.shared.RuleViolation("/", "an import file may have at most " + MAX_SHEET_BYTES
+                    + " bytes");
+        }
+        return sheets.importSheet(orderId, bytes);
+    }
+
+    @PostMapping("/api/v1/specimens")
     @ResponseStatus(HttpStatus.CREATED)
     @PreAuthorize(Access.LAB_WORKERS)
     @Operation(summary = "Register a specimen with its measured geometry; S0 and L0 are computed")
@@ -39,7 +64,7 @@ class SpecimenController {
         return service.register(request);
     }
 
-    @GetMapping
+    @GetMapping("/api/v1/specimens")
     @PreAuthorize(Access.ANY_SIGNED_IN)
     @Operation(summary = "List specimens, optionally of one heat, one order or with one lab identifier")
     List<SpecimenView> list(@RequestParam(required = false) UUID heatId,
@@ -48,21 +73,21 @@ class SpecimenController {
         return service.list(heatId, orderId, labIdentifier);
     }
 
-    @GetMapping("/{id}")
+    @GetMapping("/api/v1/specimens/{id}")
     @PreAuthorize(Access.ANY_SIGNED_IN)
     @Operation(summary = "One specimen")
     SpecimenView get(@PathVariable UUID id) {
         return service.get(id);
     }
 
-    @PutMapping("/{id}")
+    @PutMapping("/api/v1/specimens/{id}")
     @PreAuthorize(Access.LAB_WORKERS)
     @Operation(summary = "Correct a specimen's register data before testing (reason required)")
     SpecimenView correct(@PathVariable UUID id, @Valid @RequestBody SpecimenRequests.SpecimenRequest request) {
         return service.correct(id, request);
     }
 
-    @PutMapping("/{id}/after-fracture")
+    @PutMapping("/api/v1/specimens/{id}/after-fracture")
     @PreAuthorize(Access.LAB_WORKERS)
     @Operation(summary = "Record Lu, the fracture dimensions (Su) and the fracture position; "
             + "a reason is required to replace recorded values")
