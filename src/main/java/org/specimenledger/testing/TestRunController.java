@@ -44,12 +44,27 @@ class TestRunController {
     private final CurveIntake intake;
     private final AnalysisService analyses;
     private final AnalysisReplay replay;
+    private final CurveBatch batches;
 
-    TestRunController(TestRunService runs, CurveIntake intake, AnalysisService analyses, AnalysisReplay replay) {
+    TestRunController(TestRunService runs, CurveIntake intake, AnalysisService analyses, AnalysisReplay replay,
+            CurveBatch batches) {
         this.runs = runs;
         this.intake = intake;
         this.analyses = analyses;
         this.replay = replay;
+        this.batches = batches;
+    }
+
+    @PostMapping(path = "/orders/{orderId}/curves", consumes = {"application/zip", "application/x-zip-compressed"})
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Upload many curve files of an order as one zip; each entry named <specimen mark>.<ext> "
+            + "goes to that specimen's valid test run exactly as a single upload would. Answers at once with the "
+            + "job (202, Location of the job); entries that fail are reported one by one in the job's summary")
+    ResponseEntity<org.specimenledger.jobs.JobView> uploadBatch(@PathVariable UUID orderId,
+            HttpServletRequest request) throws IOException {
+        org.specimenledger.jobs.JobView job = batches.receive(orderId, request.getInputStream(),
+                request.getContentLengthLong());
+        return ResponseEntity.accepted().location(java.net.URI.create("/api/v1/jobs/" + job.id())).body(job);
     }
 
     @PostMapping("/tests")
