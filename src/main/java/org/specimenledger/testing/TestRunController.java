@@ -45,9 +45,11 @@ class TestRunController {
     private final AnalysisService analyses;
     private final AnalysisReplay replay;
     private final CurveBatch batches;
+    private final ReanalysisJobs reanalyses;
 
     TestRunController(TestRunService runs, CurveIntake intake, AnalysisService analyses, AnalysisReplay replay,
-            CurveBatch batches) {
+            CurveBatch batches, ReanalysisJobs reanalyses) {
+        this.reanalyses = reanalyses;
         this.runs = runs;
         this.intake = intake;
         this.analyses = analyses;
@@ -169,6 +171,16 @@ class TestRunController {
     AnalysisRunView pointCurrent(@PathVariable UUID id,
             @Valid @RequestBody TestRunRequests.CurrentAnalysisRequest request) {
         return analyses.pointCurrent(id, request);
+    }
+
+    @PostMapping("/analyses/reanalysis-jobs")
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Re-analyse every test run matching a filter as one job (reason required): each run gets a "
+            + "new analysis that becomes current, nothing is overwritten; 202 with the job")
+    ResponseEntity<org.specimenledger.jobs.JobView> reanalyseMany(
+            @Valid @RequestBody ReanalysisJobs.ReanalysisRequest request) {
+        org.specimenledger.jobs.JobView job = reanalyses.submit(request);
+        return ResponseEntity.accepted().location(java.net.URI.create("/api/v1/jobs/" + job.id())).body(job);
     }
 
     @GetMapping("/analyses/{id}")
