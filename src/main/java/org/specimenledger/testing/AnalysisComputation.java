@@ -3,7 +3,10 @@ package org.specimenledger.testing;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.specimenledger.analysis.ControlRateCheck;
 import org.specimenledger.analysis.CrossSectionShape;
+import org.specimenledger.analysis.PropertyResult;
+import org.specimenledger.analysis.StrainRates;
 import org.specimenledger.analysis.CyclicAnalysis;
 import org.specimenledger.analysis.CyclicParameters;
 import org.specimenledger.analysis.CyclicResult;
@@ -53,18 +56,52 @@ final class AnalysisComputation {
      * @throws org.specimenledger.analysis.AnalysisRejected when the engine cannot work with the arrays or geometry
      */
     static Outcome compute(RawCurve curve, TestMode mode, Map<String, Object> parameters, GeometryUsed geometry,
-            RunConditions run, List<CalibrationUsed> calibrations) {
+            RunConditions run, List<CalibrationUsed> calibrations, StandardRequirements table) {
         if (mode == TestMode.CYCLIC) {
             CyclicParameters p = cyclicParameters(parameters);
             CyclicResult r = CyclicAnalysis.analyse(curve.forceN(), curve.extensionMm(), p);
-            List<ResultFlag> flags = ResultFlags.of(run, geometry, calibrations, null, r);
+            List<ResultFlag> flags = ResultFlags.of(table, run, geometry, calibrations, null, r, List.of());
             return outcome(r.methodVersion(), p.asMap(), curve, AnalysisReports.cyclic(r), flags);
         }
         TensileParameters p = tensileParameters(parameters);
         TensileResult r = TensileAnalysis.analyse(curve.forceN(), curve.extensionMm(),
                 curve.hasTime() ? curve.timeS() : null, geometry.tensileSpecimen(), p);
-        List<ResultFlag> flags = ResultFlags.of(run, geometry, calibrations, r, null);
-        return outcome(r.methodVersion(), p.asMap(), curve, AnalysisReports.tensile(r), flags);
+        List<ControlRateCheck> rates = controlRates(run, curve, geometry, r);
+        List<ResultFlag> flags = ResultFlags.of(table, run, geometry, calibrations, r, null, rates);
+        Map<String, Object> results = AnalysisReports.tensile(r);
+        if (!rates.isEmpty()) {
+            results.put("controlRates", rates.stream().map(AnalysisReports::controlRate).toList());
+        }
+        return outcome(r.methodVersion(), p.asMap(), curve, results, flags);
+    }
+
+    /**
+     * The rate checks of ISO 6892-1 method B or ASTM E8/E8M, over the phases the engine found; none for
+     * other standards and methods (method A's are the engine's own {@code strainRates}).
+     */
+    static List<ControlRateCheck> controlRates(RunConditions run, RawCurve curve, GeometryUsed geometry,
+            TensileResult r) {
+        double[] time = curve.hasTime() ? curve.timeS() : null;
+        double s0 = geometry.s0Mm2().doubleValue();
+        if (run.standard() == TestStandard.ISO_6892_1 && run.method() == ControlMethod.B) {
+            PropertyResult e = r.property("E");
+            return StrainRates.isoMethodB(time, curve.forceN(), s0, e != null && e.isDetermined() ? e.value()
+                    : Double.NaN, elasticFit(r), r.strainRates());
+        }
+        if (run.standard() == TestStandard.ASTM_E8 || run.standard() == TestStandard.ASTM_E8M) {
+            return StrainRates.astmE8(time, curve.forceN(), s0, elasticFit(r), r.strainRates());
+        }
+        return List.of();
+    }
+
+    /** The modulus fit window [first, last] from E's evidence, or null when E was not determined. */
+    private static int[] elasticFit(TensileResult r) {
+        PropertyResult e = r.property("E");
+        if (e == null || !e.isDetermined() || !(e.evidence().get("firstIndex") instanceof Number first)
+                || !(e.evidence().get("lastIndex") instanceof Number last)) {
+            return null;
+        }
+        return new int[] {first.intValue(), last.intValue()};
     }
 
     /**

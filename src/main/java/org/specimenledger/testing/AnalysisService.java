@@ -41,12 +41,14 @@ public class AnalysisService {
     private final EquipmentDirectory equipment;
     private final SoftwareBuild build;
     private final CurveSettings settings;
+    private final StandardRequirements requirements;
     private final Ledger ledger;
     private final Clock clock;
 
     AnalysisService(AnalysisArchive archive, TestRunRepository runs, CurveFileRepository files, CurveContentStore store,
             TestRunService testRuns, SpecimenDirectory specimens, EquipmentDirectory equipment, SoftwareBuild build,
-            CurveSettings settings, Ledger ledger, Clock clock) {
+            CurveSettings settings, Ledger ledger, Clock clock, StandardRequirements requirements) {
+        this.requirements = requirements;
         this.archive = archive;
         this.runs = runs;
         this.files = files;
@@ -130,7 +132,7 @@ public class AnalysisService {
                 AnalysisComputation.defaults(run.mode(), run.standard(), calibrations), requested);
         long t0 = System.nanoTime();
         AnalysisComputation.Outcome o = AnalysisComputation.compute(raw, run.mode(), parameters, geometry,
-                RunConditions.of(run), calibrations);
+                RunConditions.of(run), calibrations, requirements);
         log.debug("analysis of test run {} computed in {} ms", run.id(), (System.nanoTime() - t0) / 1_000_000);
         Instant now = clock.instant().truncatedTo(ChronoUnit.MICROS);
         AnalysisArchive.Row row = new AnalysisArchive.Row(UUID.randomUUID(), run.id(), archive.nextSequence(run.id()),

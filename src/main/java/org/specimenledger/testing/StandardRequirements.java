@@ -16,6 +16,10 @@ import java.util.regex.Pattern;
  *
  * <p>Classes are compared by their number: 0.5 is better than 1, 1 better than 2. A {@code null} class
  * limit means the standard sets no class rule beyond a calibration valid on the test date.
+ *
+ * <p>The values below are the defaults ({@link #DEFAULTS}); a laboratory replaces any of them through
+ * {@link StandardSettings} ({@code ledger.standards.<standard>.*}) once it has confirmed them against its own
+ * copy of the standard, and the service uses that table ({@link #with}).
  */
 final class StandardRequirements {
 
@@ -37,6 +41,9 @@ final class StandardRequirements {
 
     private static final Map<TestStandard, Requirement> TABLE = new EnumMap<>(TestStandard.class);
 
+    /** The table as written below, with the sources and marks of its values. */
+    static final StandardRequirements DEFAULTS;
+
     static {
         // ISO 6892-1 asks for a class 1 force-measuring system (ISO 7500-1) [M], extensometer class 1 for
         // ReH, ReL, Rp, Rt, Ae and class 2 for Ag, Agt, A, At (ISO 9513) [M]; 10–35 °C [M for 6892-1; S in
@@ -56,6 +63,58 @@ final class StandardRequirements {
                 "ISO 37 with the ISO 23529 laboratory temperature 23 ± 2 °C [M]; no class rule"));
         TABLE.put(TestStandard.OTHER, new Requirement(null, null, null, null, null,
                 "other procedure: a valid calibration only, no class or temperature rule"));
+        DEFAULTS = new StandardRequirements(TABLE);
+    }
+
+    private final Map<TestStandard, Requirement> table;
+
+    private StandardRequirements(Map<TestStandard, Requirement> table) {
+        this.table = Map.copyOf(table);
+    }
+
+    /**
+     * This table with the laboratory's own values where configured. A class or temperature given as
+     * {@code none} removes that rule; the source then says the value was configured.
+     */
+    StandardRequirements with(StandardSettings settings) {
+        Map<TestStandard, Requirement> out = new EnumMap<>(table);
+        if (settings == null || settings.requirements() == null) {
+            return this;
+        }
+        settings.requirements().forEach((standard, given) -> {
+            Requirement d = out.get(standard);
+            Requirement r = new Requirement(
+                    pick(given.forceClass(), d.forceClass()),
+                    pick(given.extensometerClassForStrengths(), d.extensometerClassForStrengths()),
+                    pick(given.extensometerClassForElongations(), d.extensometerClassForElongations()),
+                    decimal(given.minTemperatureC(), d.minTemperatureC()),
+                    decimal(given.maxTemperatureC(), d.maxTemperatureC()),
+                    "laboratory configuration (ledger.standards) over: " + d.source());
+            if (r.equals(new Requirement(d.forceClass(), d.extensometerClassForStrengths(),
+                    d.extensometerClassForElongations(), d.minTemperatureC(), d.maxTemperatureC(), r.source()))) {
+                return; // nothing actually changed: keep the default's source
+            }
+            out.put(standard, r);
+        });
+        return new StandardRequirements(out);
+    }
+
+    private static String pick(String given, String fallback) {
+        if (given == null || given.isBlank()) {
+            return fallback;
+        }
+        if (given.trim().equalsIgnoreCase("none")) {
+            return null;
+        }
+        new BigDecimal(given.trim()); // a class is a number; refuse anything else at start
+        return given.trim();
+    }
+
+    private static BigDecimal decimal(String given, BigDecimal fallback) {
+        if (given == null || given.isBlank()) {
+            return fallback;
+        }
+        return given.trim().equalsIgnoreCase("none") ? null : new BigDecimal(given.trim());
     }
 
     /**
@@ -75,11 +134,8 @@ final class StandardRequirements {
     static final List<String> KNOWN_PROPERTIES = List.of("E", "ReH", "ReL", "Rp0.2", "Rt0.5", "Fm", "Rm", "Ae", "Agt",
             "Ag", "At", "A", "Z", "W");
 
-    private StandardRequirements() {
-    }
-
-    static Requirement of(TestStandard standard) {
-        return TABLE.get(standard);
+    Requirement of(TestStandard standard) {
+        return table.get(standard);
     }
 
     /** Whether a property symbol is one this laboratory reports (Rp and Rt with any offset). */
@@ -94,7 +150,7 @@ final class StandardRequirements {
      *
      * @return a class such as "1", or null when the standard or those properties need no class
      */
-    static String extensometerClassFor(TestStandard standard, Collection<String> reported) {
+    String extensometerClassFor(TestStandard standard, Collection<String> reported) {
         Requirement r = of(standard);
         boolean strengths = reported == null || reported.stream().anyMatch(p -> STRENGTH_PROPERTIES.matcher(p).matches());
         boolean elongations = reported == null || reported.stream().anyMatch(ELONGATION_PROPERTIES::contains);
@@ -117,7 +173,7 @@ final class StandardRequirements {
     }
 
     /** Whether the test temperature lies outside the standard's range (ends included in the range). */
-    static boolean temperatureOutside(TestStandard standard, BigDecimal temperatureC) {
+    boolean temperatureOutside(TestStandard standard, BigDecimal temperatureC) {
         Requirement r = of(standard);
         return (r.minTemperatureC() != null && temperatureC.compareTo(r.minTemperatureC()) < 0)
                 || (r.maxTemperatureC() != null && temperatureC.compareTo(r.maxTemperatureC()) > 0);

@@ -41,9 +41,11 @@ public class TestRunService {
     private final SpecimenDirectory specimens;
     private final Ledger ledger;
     private final Clock clock;
+    private final StandardRequirements requirements;
 
     TestRunService(TestRunRepository runs, CurveFileRepository curves, TestRunRules rules, EquipmentDirectory equipment,
-            SpecimenDirectory specimens, Ledger ledger, Clock clock) {
+            SpecimenDirectory specimens, Ledger ledger, Clock clock, StandardRequirements requirements) {
+        this.requirements = requirements;
         this.runs = runs;
         this.curves = curves;
         this.rules = rules;
@@ -67,7 +69,7 @@ public class TestRunService {
         }
         TestRunRules.Checked checked = rules.checked(request, now());
         List<CalibrationUsed> used = calibrationsOn(checked);
-        List<CalibrationGate.Finding> findings = CalibrationGate.check(used, request.standard(),
+        List<CalibrationGate.Finding> findings = CalibrationGate.check(requirements, used, request.standard(),
                 checked.facts().reportedProperties());
         if (!findings.isEmpty() && override == null) {
             throw new CalibrationNotValid(findings);
