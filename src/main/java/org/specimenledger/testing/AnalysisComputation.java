@@ -110,6 +110,19 @@ final class AnalysisComputation {
      * the ASTM rounding practice for ASTM runs.
      */
     static Map<String, Object> defaults(TestMode mode, TestStandard standard, List<CalibrationUsed> calibrations) {
+        return defaults(mode, standard, calibrations, null, null);
+    }
+
+    /**
+     * As {@link #defaults(TestMode, TestStandard, List)}, with u(S0) from the specimen's own dimension readings
+     * (their spread and resolution, {@link DimensionUncertainty}) for round, flat and tube pieces; without
+     * readings (an OTHER piece, or none given) no cross-section uncertainty is assumed.
+     *
+     * @param shape the specimen's shape name (ROUND, FLAT, TUBE, OTHER), or null
+     * @param readings the original readings in mm by dimension symbol, or null
+     */
+    static Map<String, Object> defaults(TestMode mode, TestStandard standard, List<CalibrationUsed> calibrations,
+            String shape, Map<String, List<java.math.BigDecimal>> readings) {
         if (mode == TestMode.CYCLIC) {
             return new LinkedHashMap<>(CyclicParameters.defaults().asMap());
         }
@@ -129,12 +142,38 @@ final class AnalysisComputation {
                 bias = 3 * cls;
             }
         }
-        TensileParameters p = TensileParameters.defaults().withUncertainty(new UncertaintyInputs(force, extensometer,
-                bias, CrossSectionShape.DIRECT, 0, 0, 0, 0, 0, 0));
+        UncertaintyInputs inputs = new UncertaintyInputs(force, extensometer, bias, CrossSectionShape.DIRECT, 0, 0, 0,
+                0, 0, 0);
+        inputs = withCrossSection(inputs, shape, readings);
+        TensileParameters p = TensileParameters.defaults().withUncertainty(inputs);
         if (standard == TestStandard.ASTM_E8 || standard == TestStandard.ASTM_E8M) {
             p = p.withRounding(RoundingRule.ASTM_PRACTICE);
         }
         return new LinkedHashMap<>(p.asMap());
+    }
+
+    /** The inputs with u of each dimension from its readings, for the shapes whose S0 is computed from them. */
+    private static UncertaintyInputs withCrossSection(UncertaintyInputs u, String shape,
+            Map<String, List<java.math.BigDecimal>> readings) {
+        if (shape == null || readings == null) {
+            return u;
+        }
+        String[] symbols = switch (shape) {
+            case "ROUND" -> new String[] {"d", null};
+            case "FLAT" -> new String[] {"a", "b"};
+            case "TUBE" -> new String[] {"a", "D"};
+            default -> null;
+        };
+        if (symbols == null) {
+            return u;
+        }
+        DimensionUncertainty.Estimate first = DimensionUncertainty.of(readings.get(symbols[0]));
+        DimensionUncertainty.Estimate second = symbols[1] == null ? null : DimensionUncertainty.of(readings.get(symbols[1]));
+        if (first == null || (symbols[1] != null && second == null)) {
+            return u;
+        }
+        return u.withCrossSection(CrossSectionShape.valueOf(shape), first.meanMm(), first.standardMm(),
+                second == null ? 0 : second.meanMm(), second == null ? 0 : second.standardMm());
     }
 
     /** The defaults with the requested keys replaced; an unknown key is refused when the engine reads it. */

@@ -125,11 +125,12 @@ public class AnalysisService {
 
     private AnalysisRunView record(TestRun run, CurveFile file, RawCurve raw, Map<String, Object> requested,
             UUID replaces, String reason) {
-        GeometryUsed geometry = GeometryUsed.of(specimens.find(run.specimenId())
-                .orElseThrow(() -> new IllegalStateException("specimen " + run.specimenId() + " of a test run is gone")));
+        org.specimenledger.specimens.SpecimenView specimen = specimens.find(run.specimenId())
+                .orElseThrow(() -> new IllegalStateException("specimen " + run.specimenId() + " of a test run is gone"));
+        GeometryUsed geometry = GeometryUsed.of(specimen);
         List<CalibrationUsed> calibrations = calibrationsOn(run);
-        Map<String, Object> parameters = AnalysisComputation.merged(
-                AnalysisComputation.defaults(run.mode(), run.standard(), calibrations), requested);
+        Map<String, Object> parameters = AnalysisComputation.merged(AnalysisComputation.defaults(run.mode(),
+                run.standard(), calibrations, specimen.shape().name(), specimen.readings()), requested);
         long t0 = System.nanoTime();
         AnalysisComputation.Outcome o = AnalysisComputation.compute(raw, run.mode(), parameters, geometry,
                 RunConditions.of(run), calibrations, requirements);
