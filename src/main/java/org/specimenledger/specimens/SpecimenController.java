@@ -41,6 +41,10 @@ class SpecimenController {
             + "shape, position, diameter, thickness, width, outer_diameter, area, area_method, k, l0, round_l0, "
             + "le, lc, note); every row is checked first, all problems are reported at once with /rows/{row}/{column} "
             + "and nothing is stored unless every row is valid; one ledger event per specimen")
+    @io.swagger.v3.oas.annotations.parameters.RequestBody(required = true, description = "The import sheet: UTF-8 "
+            + "CSV, header first; layout in the README (\"Specimen import sheet\")", content =
+            @io.swagger.v3.oas.annotations.media.Content(mediaType = "text/csv",
+                    schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")))
     SpecimenImport.Imported importSheet(@PathVariable UUID orderId, jakarta.servlet.http.HttpServletRequest request)
             throws java.io.IOException {
         long announced = request.getContentLengthLong();

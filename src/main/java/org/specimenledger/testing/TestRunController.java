@@ -62,6 +62,10 @@ class TestRunController {
     @Operation(summary = "Upload many curve files of an order as one zip; each entry named <specimen mark>.<ext> "
             + "goes to that specimen's valid test run exactly as a single upload would. Answers at once with the "
             + "job (202, Location of the job); entries that fail are reported one by one in the job's summary")
+    @io.swagger.v3.oas.annotations.parameters.RequestBody(required = true, description = "A zip of curve files, "
+            + "each named <specimen mark>.<extension> (folders allowed, ignored for matching)", content =
+            @io.swagger.v3.oas.annotations.media.Content(mediaType = "application/zip",
+                    schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")))
     ResponseEntity<org.specimenledger.jobs.JobView> uploadBatch(@PathVariable UUID orderId,
             HttpServletRequest request) throws IOException {
         org.specimenledger.jobs.JobView job = batches.receive(orderId, request.getInputStream(),
@@ -80,9 +84,11 @@ class TestRunController {
 
     @GetMapping("/tests")
     @PreAuthorize(Access.ANY_SIGNED_IN)
-    @Operation(summary = "List test runs, optionally of one specimen (a customer sees only their own organisation's)")
-    List<TestRunView> list(@RequestParam(required = false) UUID specimenId) {
-        return runs.list(specimenId);
+    @Operation(summary = "List test runs, optionally of one specimen, oldest first; one page (page from 0, size "
+            + "1–500, default 100) with the total (a customer sees only their own organisation's)")
+    org.specimenledger.shared.Paged<TestRunView> list(@RequestParam(required = false) UUID specimenId,
+            @RequestParam(defaultValue = "0") int page, @RequestParam(defaultValue = "100") int size) {
+        return runs.list(specimenId, page, size);
     }
 
     @GetMapping("/tests/{id}")
@@ -111,10 +117,27 @@ class TestRunController {
     @Operation(summary = "Upload the raw curve file as the request body, byte for byte (once per run); the "
             + "first analysis is made at once. Same bytes as another run: 409 unless confirmDuplicate=true "
             + "with a reason")
+    @io.swagger.v3.oas.annotations.parameters.RequestBody(required = true, description = "The curve file exactly as "
+            + "the testing machine wrote it (UTF-8 text: optional # lines, a header row naming each channel with its "
+            + "unit in brackets, then data rows), sent as the whole body, not as a form. Stored byte for byte; "
+            + "at most ledger.curves.max-size (a larger Content-Length is refused with 413 before reading)",
+            content = {
+                @io.swagger.v3.oas.annotations.media.Content(mediaType = "text/csv",
+                        schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")),
+                @io.swagger.v3.oas.annotations.media.Content(mediaType = "text/tab-separated-values",
+                        schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")),
+                @io.swagger.v3.oas.annotations.media.Content(mediaType = "text/plain",
+                        schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")),
+                @io.swagger.v3.oas.annotations.media.Content(mediaType = "application/octet-stream",
+                        schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary"))})
     CurveIntake.Received upload(@PathVariable UUID id, HttpServletRequest request,
-            @RequestParam(defaultValue = "false") boolean confirmDuplicate,
-            @RequestParam(required = false) String reason,
-            @RequestParam(required = false) String filename,
+            @io.swagger.v3.oas.annotations.Parameter(description = "true to store bytes identical to another run's "
+                    + "curve (then reason is required)") @RequestParam(defaultValue = "false") boolean confirmDuplicate,
+            @io.swagger.v3.oas.annotations.Parameter(description = "why identical bytes are stored (with "
+                    + "confirmDuplicate=true); the ledger event's reason") @RequestParam(required = false) String reason,
+            @io.swagger.v3.oas.annotations.Parameter(description = "the file's original name, when no "
+                    + "Content-Disposition header gives it") @RequestParam(required = false) String filename,
+            @io.swagger.v3.oas.annotations.Parameter(description = "e.g. attachment; filename=\"run-0412.csv\"")
             @RequestHeader(name = HttpHeaders.CONTENT_DISPOSITION, required = false) String disposition)
             throws IOException {
         String name = filename;
