@@ -6,6 +6,8 @@ import java.util.List;
 import java.util.UUID;
 import org.specimenledger.shared.Access;
 import org.springframework.http.HttpStatus;
+import org.springframework.http.MediaType;
+import org.springframework.web.HttpMediaTypeNotSupportedException;
 import org.springframework.security.access.prepost.PreAuthorize;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
@@ -34,7 +36,9 @@ class SpecimenController {
     /** Import files larger than this are refused before they are read: 2,000 rows fit in far less. */
     static final long MAX_SHEET_BYTES = 4L * 1024 * 1024;
 
-    @PostMapping(path = "/api/v1/orders/{orderId}/specimens/import", consumes = {"text/csv", "application/csv"})
+    // any Content-Type reaches the handler, so that a role without access gets its 403 before the media type is
+    // looked at; the handler then refuses anything but CSV with 415
+    @PostMapping(path = "/api/v1/orders/{orderId}/specimens/import", consumes = MediaType.ALL_VALUE)
     @ResponseStatus(HttpStatus.CREATED)
     @PreAuthorize(Access.LAB_WORKERS)
     @Operation(summary = "Register all specimens of an order from one CSV file (columns: mark, heat, orientation, "
@@ -46,7 +50,18 @@ class SpecimenController {
             @io.swagger.v3.oas.annotations.media.Content(mediaType = "text/csv",
                     schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")))
     SpecimenImport.Imported importSheet(@PathVariable UUID orderId, jakarta.servlet.http.HttpServletRequest request)
-            throws java.io.IOException {
+            throws java.io.IOException, HttpMediaTypeNotSupportedException {
+        List<MediaType> csv = List.of(MediaType.parseMediaType("text/csv"), MediaType.parseMediaType("application/csv"));
+        MediaType given;
+        try {
+            given = request.getContentType() == null ? null : MediaType.parseMediaType(request.getContentType());
+        } catch (org.springframework.http.InvalidMediaTypeException e) {
+            given = null; // a malformed Content-Type is no CSV either
+        }
+        MediaType type = given;
+        if (type == null || csv.stream().noneMatch(m -> m.includes(type))) {
+            throw new HttpMediaTypeNotSupportedException(type, csv);
+        }
         long announced = request.getContentLengthLong();
         if (announced > MAX_SHEET_BYTES) {
             throw new org.specimenledger.shared.RuleViolation("/", "an import file may have at most " + MAX_SHEET_BYTES

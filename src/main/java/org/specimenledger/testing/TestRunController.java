@@ -57,7 +57,8 @@ class TestRunController {
         this.batches = batches;
     }
 
-    @PostMapping(path = "/orders/{orderId}/curves", consumes = {"application/zip", "application/x-zip-compressed"})
+    // any Content-Type reaches the handler (a role without access gets its 403 first); anything but a zip is 415
+    @PostMapping(path = "/orders/{orderId}/curves", consumes = MediaType.ALL_VALUE)
     @PreAuthorize(Access.LAB_WORKERS)
     @Operation(summary = "Upload many curve files of an order as one zip; each entry named <specimen mark>.<ext> "
             + "goes to that specimen's valid test run exactly as a single upload would. Answers at once with the "
@@ -67,7 +68,13 @@ class TestRunController {
             @io.swagger.v3.oas.annotations.media.Content(mediaType = "application/zip",
                     schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")))
     ResponseEntity<org.specimenledger.jobs.JobView> uploadBatch(@PathVariable UUID orderId,
-            HttpServletRequest request) throws IOException {
+            HttpServletRequest request) throws IOException, org.springframework.web.HttpMediaTypeNotSupportedException {
+        List<MediaType> zip = List.of(MediaType.parseMediaType("application/zip"),
+                MediaType.parseMediaType("application/x-zip-compressed"));
+        MediaType given = request.getContentType() == null ? null : mediaType(request.getContentType());
+        if (given == null || zip.stream().noneMatch(m -> m.includes(given))) {
+            throw new org.springframework.web.HttpMediaTypeNotSupportedException(given, zip);
+        }
         org.specimenledger.jobs.JobView job = batches.receive(orderId, request.getInputStream(),
                 request.getContentLengthLong());
         return ResponseEntity.accepted().location(java.net.URI.create("/api/v1/jobs/" + job.id())).body(job);

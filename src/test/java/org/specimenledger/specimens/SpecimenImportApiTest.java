@@ -127,5 +127,8 @@ class SpecimenImportApiTest extends IntegrationTest {
         Api.Response customer = as(TestAccounts.CUSTOMER).postBytes("/api/v1/orders/" + order + "/specimens/import",
                 "text/csv", HEADER.getBytes(StandardCharsets.UTF_8));
         assertThat(customer.status()).isEqualTo(403);
+        Api.Response json = technician().postBytes("/api/v1/orders/" + order + "/specimens/import", "application/json",
+                "{}".getBytes(StandardCharsets.UTF_8));
+        assertThat(json.status()).as(json.toString()).isEqualTo(415);
     }
 }

@@ -169,5 +169,7 @@ class CurveBatchApiTest extends TestRunTesting {
         assertProblem(send(b.orderId(), "not a zip".getBytes(StandardCharsets.UTF_8)), 422, "/", "holds no file");
         assertThat(send(java.util.UUID.randomUUID().toString(), zip(Map.of("x.csv", new byte[1]))).status())
                 .isEqualTo(404);
+        assertThat(technician().postBytes("/api/v1/orders/" + b.orderId() + "/curves", "text/csv", new byte[1])
+                .status()).isEqualTo(415);
     }
 }
