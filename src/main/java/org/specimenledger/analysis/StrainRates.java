@@ -75,18 +75,25 @@ public final class StrainRates {
      */
     public static List<ControlRateCheck> isoMethodB(double[] timeS, double[] forceN, double s0Mm2, double modulusMPa,
             int[] elasticFit, List<StrainRateCheck> phases) {
+        return isoMethodB(timeS, forceN, s0Mm2, modulusMPa, elasticFit, phases, ControlRateRules.defaults());
+    }
+
+    /** As {@link #isoMethodB(double[], double[], double, double, int[], List)} against the given rules. */
+    public static List<ControlRateCheck> isoMethodB(double[] timeS, double[] forceN, double s0Mm2, double modulusMPa,
+            int[] elasticFit, List<StrainRateCheck> phases, ControlRateRules rules) {
         List<ControlRateCheck> out = new ArrayList<>();
         StrainRateCheck elastic = phase(phases, StrainRatePhase.ELASTIC);
         if (!Double.isFinite(modulusMPa)) {
-            out.add(new ControlRateCheck(ISO_B_ELASTIC_HIGH_MODULUS, PropertyStatus.NOT_DETERMINABLE, Double.NaN, null,
+            out.add(new ControlRateCheck(rules.isoBElasticHighModulus(), PropertyStatus.NOT_DETERMINABLE, Double.NaN, null,
                     elastic.firstIndex(), elastic.lastIndex(),
                     "E was not determined, and the method B elastic range depends on it"));
         } else {
-            out.add(stress(modulusMPa < ISO_B_MODULUS_LIMIT_MPA ? ISO_B_ELASTIC_LOW_MODULUS : ISO_B_ELASTIC_HIGH_MODULUS,
+            out.add(stress(modulusMPa < ISO_B_MODULUS_LIMIT_MPA ? rules.isoBElasticLowModulus()
+                            : rules.isoBElasticHighModulus(),
                     timeS, forceN, s0Mm2, elastic, elasticFit));
         }
-        out.add(strain(ISO_B_YIELD, phase(phases, StrainRatePhase.YIELD)));
-        out.add(strain(ISO_B_HARDENING, phase(phases, StrainRatePhase.HARDENING)));
+        out.add(strain(rules.isoBYield(), phase(phases, StrainRatePhase.YIELD)));
+        out.add(strain(rules.isoBHardening(), phase(phases, StrainRatePhase.HARDENING)));
         return List.copyOf(out);
     }
 
@@ -98,10 +105,16 @@ public final class StrainRates {
      */
     public static List<ControlRateCheck> astmE8(double[] timeS, double[] forceN, double s0Mm2, int[] elasticFit,
             List<StrainRateCheck> phases) {
+        return astmE8(timeS, forceN, s0Mm2, elasticFit, phases, ControlRateRules.defaults());
+    }
+
+    /** As {@link #astmE8(double[], double[], double, int[], List)} against the given rules. */
+    public static List<ControlRateCheck> astmE8(double[] timeS, double[] forceN, double s0Mm2, int[] elasticFit,
+            List<StrainRateCheck> phases, ControlRateRules rules) {
         StrainRateCheck elastic = phase(phases, StrainRatePhase.ELASTIC);
-        return List.of(stress(ASTM_YIELD_STRESSING, timeS, forceN, s0Mm2, elastic, elasticFit),
-                strain(ASTM_YIELD_STRAINING, elastic),
-                strain(ASTM_TENSILE_STRENGTH, phase(phases, StrainRatePhase.HARDENING)));
+        return List.of(stress(rules.astmYieldStressing(), timeS, forceN, s0Mm2, elastic, elasticFit),
+                strain(rules.astmYieldStraining(), elastic),
+                strain(rules.astmTensileStrength(), phase(phases, StrainRatePhase.HARDENING)));
     }
 
     private static StrainRateCheck phase(List<StrainRateCheck> phases, StrainRatePhase phase) {

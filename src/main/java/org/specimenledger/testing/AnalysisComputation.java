@@ -66,7 +66,7 @@ final class AnalysisComputation {
         TensileParameters p = tensileParameters(parameters);
         TensileResult r = TensileAnalysis.analyse(curve.forceN(), curve.extensionMm(),
                 curve.hasTime() ? curve.timeS() : null, geometry.tensileSpecimen(), p);
-        List<ControlRateCheck> rates = controlRates(run, curve, geometry, r);
+        List<ControlRateCheck> rates = controlRates(run, curve, geometry, r, table.rates());
         List<ResultFlag> flags = ResultFlags.of(table, run, geometry, calibrations, r, null, rates);
         Map<String, Object> results = AnalysisReports.tensile(r);
         if (!rates.isEmpty()) {
@@ -80,16 +80,16 @@ final class AnalysisComputation {
      * other standards and methods (method A's are the engine's own {@code strainRates}).
      */
     static List<ControlRateCheck> controlRates(RunConditions run, RawCurve curve, GeometryUsed geometry,
-            TensileResult r) {
+            TensileResult r, org.specimenledger.analysis.ControlRateRules rules) {
         double[] time = curve.hasTime() ? curve.timeS() : null;
         double s0 = geometry.s0Mm2().doubleValue();
         if (run.standard() == TestStandard.ISO_6892_1 && run.method() == ControlMethod.B) {
             PropertyResult e = r.property("E");
             return StrainRates.isoMethodB(time, curve.forceN(), s0, e != null && e.isDetermined() ? e.value()
-                    : Double.NaN, elasticFit(r), r.strainRates());
+                    : Double.NaN, elasticFit(r), r.strainRates(), rules);
         }
         if (run.standard() == TestStandard.ASTM_E8 || run.standard() == TestStandard.ASTM_E8M) {
-            return StrainRates.astmE8(time, curve.forceN(), s0, elasticFit(r), r.strainRates());
+            return StrainRates.astmE8(time, curve.forceN(), s0, elasticFit(r), r.strainRates(), rules);
         }
         return List.of();
     }

@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
+import org.specimenledger.analysis.ControlRateRule;
+import org.specimenledger.analysis.ControlRateRules;
 
 /**
  * What each standard asks of the equipment and the test conditions, in one place with the source and
@@ -67,9 +69,46 @@ final class StandardRequirements {
     }
 
     private final Map<TestStandard, Requirement> table;
+    private final ControlRateRules rates;
 
     private StandardRequirements(Map<TestStandard, Requirement> table) {
+        this(table, ControlRateRules.defaults());
+    }
+
+    private StandardRequirements(Map<TestStandard, Requirement> table, ControlRateRules rates) {
         this.table = Map.copyOf(table);
+        this.rates = rates;
+    }
+
+    /** The rate rules of the method B and ASTM checks. */
+    ControlRateRules rates() {
+        return rates;
+    }
+
+    private static ControlRateRules rates(ControlRateRules d, Map<String, StandardSettings.Range> given) {
+        if (given == null || given.isEmpty()) {
+            return d;
+        }
+        java.util.Map<String, ControlRateRule> byKey = new java.util.LinkedHashMap<>();
+        byKey.put("iso-b-elastic-low-modulus", d.isoBElasticLowModulus());
+        byKey.put("iso-b-elastic-high-modulus", d.isoBElasticHighModulus());
+        byKey.put("iso-b-yield", d.isoBYield());
+        byKey.put("iso-b-hardening", d.isoBHardening());
+        byKey.put("astm-yield-stressing", d.astmYieldStressing());
+        byKey.put("astm-yield-straining", d.astmYieldStraining());
+        byKey.put("astm-tensile-strength", d.astmTensileStrength());
+        given.forEach((key, range) -> {
+            ControlRateRule rule = byKey.get(key);
+            if (rule == null) {
+                throw new IllegalArgumentException("ledger.standards.rates." + key + " names no rate rule; the rules are "
+                        + byKey.keySet());
+            }
+            byKey.put(key, ControlRateRules.ranged(rule, range.lower() == null ? rule.lower() : range.lower(),
+                    range.upper() == null ? rule.upper() : range.upper()));
+        });
+        return new ControlRateRules(byKey.get("iso-b-elastic-low-modulus"), byKey.get("iso-b-elastic-high-modulus"),
+                byKey.get("iso-b-yield"), byKey.get("iso-b-hardening"), byKey.get("astm-yield-stressing"),
+                byKey.get("astm-yield-straining"), byKey.get("astm-tensile-strength"));
     }
 
     /**
@@ -78,10 +117,12 @@ final class StandardRequirements {
      */
     StandardRequirements with(StandardSettings settings) {
         Map<TestStandard, Requirement> out = new EnumMap<>(table);
-        if (settings == null || settings.requirements() == null) {
+        if (settings == null || (settings.requirements() == null && settings.rates() == null)) {
             return this;
         }
-        settings.requirements().forEach((standard, given) -> {
+        ControlRateRules configuredRates = rates(rates, settings.rates());
+        (settings.requirements() == null ? Map.<TestStandard, StandardSettings.Given>of() : settings.requirements())
+                .forEach((standard, given) -> {
             Requirement d = out.get(standard);
             Requirement r = new Requirement(
                     pick(given.forceClass(), d.forceClass()),
@@ -96,7 +137,7 @@ final class StandardRequirements {
             }
             out.put(standard, r);
         });
-        return new StandardRequirements(out);
+        return new StandardRequirements(out, configuredRates);
     }
 
     private static String pick(String given, String fallback) {
