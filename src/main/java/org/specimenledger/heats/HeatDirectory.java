@@ -1,5 +1,6 @@
 package org.specimenledger.heats;
 
+import java.util.List;
 import java.util.Optional;
 import java.util.UUID;
 import org.springframework.stereotype.Component;
@@ -23,5 +24,13 @@ public class HeatDirectory {
     @Transactional(readOnly = true)
     public Optional<HeatView> find(UUID id) {
         return id == null ? Optional.empty() : heats.findById(id).map(HeatView::of);
+    }
+
+    /** Heats with this heat number (ignoring case), by producer; heat numbers are unique per producer only. */
+    @Transactional(readOnly = true)
+    public List<HeatView> withNumber(String heatNumber) {
+        return heatNumber == null || heatNumber.isBlank() ? List.of()
+                : heats.findAllByHeatNumberIgnoreCaseOrderByProducerAsc(heatNumber.trim()).stream().map(HeatView::of)
+                        .toList();
     }
 }

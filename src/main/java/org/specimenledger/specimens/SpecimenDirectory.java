@@ -22,4 +22,12 @@ public class SpecimenDirectory {
     public Optional<SpecimenView> find(UUID id) {
         return id == null ? Optional.empty() : specimens.findById(id).map(SpecimenView::of);
     }
+
+    /** The specimen of an order with this mark (ignoring case, as marks are unique that way), if any. */
+    @Transactional(readOnly = true)
+    public Optional<SpecimenView> inOrderWithMark(UUID orderId, String mark) {
+        return mark == null || mark.isBlank() ? Optional.empty()
+                : specimens.findByLabIdentifierIgnoreCase(mark.trim()).filter(s -> s.orderId().equals(orderId))
+                        .map(SpecimenView::of);
+    }
 }

@@ -11,6 +11,8 @@ interface SpecimenRepository extends JpaRepository<Specimen, UUID>, JpaSpecifica
 
     boolean existsByLabIdentifierIgnoreCase(String labIdentifier);
 
+    java.util.Optional<Specimen> findByLabIdentifierIgnoreCase(String labIdentifier);
+
     boolean existsByLabIdentifierIgnoreCaseAndIdNot(String labIdentifier, UUID id);
 
     boolean existsByHeatIdAndCustomerId(UUID heatId, UUID customerId);

@@ -38,11 +38,13 @@ class AnalysisReplay {
     private final CurveContentStore store;
     private final SoftwareBuild build;
     private final CurveSettings settings;
+    private final StandardRequirements requirements;
     private final Ledger ledger;
     private final Clock clock;
 
     AnalysisReplay(AnalysisService analyses, TestRunRepository runs, CurveContentStore store, SoftwareBuild build,
-            CurveSettings settings, Ledger ledger, Clock clock) {
+            CurveSettings settings, Ledger ledger, Clock clock, StandardRequirements requirements) {
+        this.requirements = requirements;
         this.analyses = analyses;
         this.runs = runs;
         this.store = store;
@@ -121,7 +123,8 @@ class AnalysisReplay {
         try {
             RawCurve raw = StoredCurves.read(bytes, settings);
             AnalysisComputation.Outcome o = AnalysisComputation.compute(raw, row.mode(),
-                    StoredJson.map(row.parameters()), row.geometryUsed(), RunConditions.of(run), row.calibrationList());
+                    StoredJson.map(row.parameters()), row.geometryUsed(), RunConditions.of(run), row.calibrationList(),
+                    requirements);
             replayedMethod = o.methodVersion();
             ObjectNode replayed = (ObjectNode) o.comparable();
             replayed.set("parameters", o.parameters());

@@ -8,6 +8,7 @@ import org.specimenledger.analysis.AnalysisWarning;
 import org.specimenledger.analysis.CyclicResult;
 import org.specimenledger.analysis.LoadingCycle;
 import org.specimenledger.analysis.PropertyResult;
+import org.specimenledger.analysis.ControlRateCheck;
 import org.specimenledger.analysis.StrainRateCheck;
 import org.specimenledger.analysis.TensileResult;
 import org.specimenledger.curve.RawCurve;
@@ -101,6 +102,25 @@ public final class AnalysisReports {
         m.put("firstIndex", s.firstIndex() < 0 ? null : s.firstIndex());
         m.put("lastIndex", s.lastIndex() < 0 ? null : s.lastIndex());
         m.put("reason", s.reason());
+        return m;
+    }
+
+    /** One method B or ASTM rate check, with its rule, range, unit and source. */
+    static Map<String, Object> controlRate(ControlRateCheck c) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("rule", c.rule().name());
+        m.put("phase", c.rule().phase().name());
+        m.put("quantity", c.rule().quantity().name());
+        m.put("unit", c.rule().quantity().unit());
+        m.put("status", c.status().name());
+        m.put("measured", finite(c.measured()));
+        m.put("lower", c.rule().lower());
+        m.put("upper", c.rule().upper());
+        m.put("withinRange", c.withinRange());
+        m.put("firstIndex", c.firstIndex() < 0 ? null : c.firstIndex());
+        m.put("lastIndex", c.lastIndex() < 0 ? null : c.lastIndex());
+        m.put("source", c.rule().source());
+        m.put("reason", c.reason());
         return m;
     }
 

@@ -41,12 +41,14 @@ public class AnalysisService {
     private final EquipmentDirectory equipment;
     private final SoftwareBuild build;
     private final CurveSettings settings;
+    private final StandardRequirements requirements;
     private final Ledger ledger;
     private final Clock clock;
 
     AnalysisService(AnalysisArchive archive, TestRunRepository runs, CurveFileRepository files, CurveContentStore store,
             TestRunService testRuns, SpecimenDirectory specimens, EquipmentDirectory equipment, SoftwareBuild build,
-            CurveSettings settings, Ledger ledger, Clock clock) {
+            CurveSettings settings, Ledger ledger, Clock clock, StandardRequirements requirements) {
+        this.requirements = requirements;
         this.archive = archive;
         this.runs = runs;
         this.files = files;
@@ -58,12 +60,6 @@ public class AnalysisService {
         this.settings = settings;
         this.ledger = ledger;
         this.clock = clock;
-    }
-
-    /** The analysis made when the curve arrives, with the run's default parameters. */
-    @Transactional(propagation = Propagation.MANDATORY)
-    AnalysisRunView recordFirst(TestRun run, CurveFile file, RawCurve raw) {
-        return record(run, file, raw, null, null, null);
     }
 
     /**
@@ -123,21 +119,50 @@ public class AnalysisService {
 
     private AnalysisRunView record(TestRun run, CurveFile file, RawCurve raw, Map<String, Object> requested,
             UUID replaces, String reason) {
-        GeometryUsed geometry = GeometryUsed.of(specimens.find(run.specimenId())
-                .orElseThrow(() -> new IllegalStateException("specimen " + run.specimenId() + " of a test run is gone")));
+        return store(run, file, compute(run, inputsFor(run, requested), raw), replaces, reason);
+    }
+
+    /** What an analysis takes from the registers: the geometry, the calibrations and the full parameter set. */
+    record Inputs(GeometryUsed geometry, List<CalibrationUsed> calibrations, Map<String, Object> parameters) {
+    }
+
+    /** An analysis computed and not yet stored. */
+    record Computed(Inputs inputs, AnalysisComputation.Outcome outcome) {
+    }
+
+    /**
+     * Reads what the analysis of a run needs (database reads on the caller's transaction). The intake calls it
+     * before the curve's bytes occupy the connection, so that the computation can run beside the write.
+     */
+    Inputs inputsFor(TestRun run, Map<String, Object> requested) {
+        org.specimenledger.specimens.SpecimenView specimen = specimens.find(run.specimenId())
+                .orElseThrow(() -> new IllegalStateException("specimen " + run.specimenId() + " of a test run is gone"));
+        GeometryUsed geometry = GeometryUsed.of(specimen);
         List<CalibrationUsed> calibrations = calibrationsOn(run);
-        Map<String, Object> parameters = AnalysisComputation.merged(
-                AnalysisComputation.defaults(run.mode(), run.standard(), calibrations), requested);
+        Map<String, Object> parameters = AnalysisComputation.merged(AnalysisComputation.defaults(run.mode(),
+                run.standard(), calibrations, specimen.shape().name(), specimen.readings()), requested);
+        return new Inputs(geometry, calibrations, parameters);
+    }
+
+    /** The computation alone: no database, no clock; safe while another thread writes on the connection. */
+    Computed compute(TestRun run, Inputs in, RawCurve raw) {
         long t0 = System.nanoTime();
-        AnalysisComputation.Outcome o = AnalysisComputation.compute(raw, run.mode(), parameters, geometry,
-                RunConditions.of(run), calibrations);
+        AnalysisComputation.Outcome o = AnalysisComputation.compute(raw, run.mode(), in.parameters(), in.geometry(),
+                RunConditions.of(run), in.calibrations(), requirements);
         log.debug("analysis of test run {} computed in {} ms", run.id(), (System.nanoTime() - t0) / 1_000_000);
+        return new Computed(in, o);
+    }
+
+    /** Stores a computed analysis, makes it the run's current one and writes both ledger events. */
+    @Transactional(propagation = Propagation.MANDATORY)
+    AnalysisRunView store(TestRun run, CurveFile file, Computed c, UUID replaces, String reason) {
+        AnalysisComputation.Outcome o = c.outcome();
         Instant now = clock.instant().truncatedTo(ChronoUnit.MICROS);
         AnalysisArchive.Row row = new AnalysisArchive.Row(UUID.randomUUID(), run.id(), archive.nextSequence(run.id()),
                 file.id(), file.sha256(), run.mode(), build.version(), build.commit(), o.methodVersion(),
                 StoredJson.text(o.parameters()), StoredJson.text(o.input()), StoredJson.text(o.results()),
-                StoredJson.text(calibrations), StoredJson.text(geometry), StoredJson.text(o.flags()), replaces, reason,
-                now, TestRunService.actor());
+                StoredJson.text(c.inputs().calibrations()), StoredJson.text(c.inputs().geometry()),
+                StoredJson.text(o.flags()), replaces, reason, now, TestRunService.actor());
         archive.insert(row);
         AnalysisRunView view = row.view();
         ledger.record("analysis.recorded", ENTITY, row.id(), reason, null, view);

@@ -36,7 +36,13 @@ final class CalibrationGate {
      * @param reported    the properties the run is to report, or null for all
      */
     static List<Finding> check(List<CalibrationUsed> instruments, TestStandard standard, Collection<String> reported) {
-        StandardRequirements.Requirement requirement = StandardRequirements.of(standard);
+        return check(StandardRequirements.DEFAULTS, instruments, standard, reported);
+    }
+
+    /** As {@link #check(List, TestStandard, Collection)}, against the given requirement table. */
+    static List<Finding> check(StandardRequirements table, List<CalibrationUsed> instruments, TestStandard standard,
+            Collection<String> reported) {
+        StandardRequirements.Requirement requirement = table.of(standard);
         List<Finding> findings = new ArrayList<>();
         for (CalibrationUsed c : instruments) {
             if (!c.validOnTestDate()) {
@@ -59,7 +65,7 @@ final class CalibrationGate {
                     }
                 }
                 case EXTENSOMETER -> {
-                    String limit = StandardRequirements.extensometerClassFor(standard, reported);
+                    String limit = table.extensometerClassFor(standard, reported);
                     if (!StandardRequirements.meets(c.accuracyClass(), limit)) {
                         findings.add(new Finding(c.role(), c, "class " + c.accuracyClass() + " (calibration "
                                 + c.certificateReference() + "); " + standard.title() + " needs class " + limit

@@ -99,21 +99,22 @@ public class CurveIntake {
             throw new UncheckedIOException("reading the upload failed", e);
         }
         byte[] bytes = captured.bytes();
+        String sha256 = captured.sha256();
         long t1 = System.nanoTime();
-        Received received = transaction.execute(t -> store(testRunId, upload, bytes));
+        Received received = transaction.execute(t -> store(testRunId, upload, bytes, sha256));
         log.debug("curve of test run {}: {} bytes received in {} ms, read, stored and analysed in {} ms", testRunId,
                 bytes.length, (t1 - t0) / 1_000_000, (System.nanoTime() - t1) / 1_000_000);
         return received;
     }
 
     /**
-     * Fingerprints the bytes, refuses a duplicate, then stores them while the reader parses them (the two
-     * take about as long), and only then writes the description, the analysis and the ledger events. Any
-     * refusal rolls the whole transaction back, bytes included.
+     * Fingerprints the bytes, refuses a duplicate, reads what the analysis needs from the registers, then
+     * stores the bytes while the reader parses them and the engine analyses them (the write takes about as
+     * long as both), and only then writes the description, the analysis and the ledger events. Any refusal
+     * rolls the whole transaction back, bytes included.
      */
-    private Received store(UUID testRunId, Upload upload, byte[] bytes) {
+    private Received store(UUID testRunId, Upload upload, byte[] bytes, String sha256) {
         TestRun run = refuseSecondCurve(testRunId);
-        String sha256 = AnalysisReplay.sha256(bytes);
         List<CurveFile> same = files.findAllBySha256AndTestRunIdNotOrderByReceivedAtAsc(sha256, testRunId);
         UUID duplicateOf = null;
         String duplicateReason = null;
@@ -132,18 +133,25 @@ public class CurveIntake {
             duplicateOf = other;
         }
         UUID curveId = UUID.randomUUID();
+        // everything the analysis reads from the registers, before the bytes occupy the connection
+        AnalysisService.Inputs inputs = analyses.inputsFor(run, null);
         long t0 = System.nanoTime();
         CurveContentStore.Pending write = store.put(curveId, sha256, bytes);
         RawCurve raw;
+        AnalysisService.Computed computed;
+        long t1;
         try {
             raw = new CurveReader(settings.limits()).read(bytes);
+            t1 = System.nanoTime();
+            // the computation needs no database, so it runs while the bytes are still being written
+            computed = analyses.compute(run, inputs, raw);
         } catch (RuntimeException refused) {
             write.abandon();
             throw refused;
         }
-        long t1 = System.nanoTime();
-        write.await();
         long t2 = System.nanoTime();
+        write.await();
+        long t3 = System.nanoTime();
         if (!raw.sha256().equals(sha256)) {
             throw new IllegalStateException("the reader's fingerprint " + raw.sha256() + " differs from " + sha256);
         }
@@ -154,9 +162,10 @@ public class CurveIntake {
                 now, actor));
         RawCurveView view = RawCurveView.of(file);
         ledger.record("curve.received", ENTITY, file.id(), duplicateReason, null, view);
-        AnalysisRunView analysis = analyses.recordFirst(run, file, raw);
-        log.debug("curve of test run {}: parsed in {} ms, bytes stored {} ms after, analysis recorded in {} ms",
-                testRunId, (t1 - t0) / 1_000_000, (t2 - t1) / 1_000_000, (System.nanoTime() - t2) / 1_000_000);
+        AnalysisRunView analysis = analyses.store(run, file, computed, null, null);
+        log.debug("curve of test run {}: parsed in {} ms, analysed in {} ms, bytes stored {} ms after that, "
+                + "description, analysis and ledger stored in {} ms", testRunId, (t1 - t0) / 1_000_000,
+                (t2 - t1) / 1_000_000, (t3 - t2) / 1_000_000, (System.nanoTime() - t3) / 1_000_000);
         return new Received(view, analysis);
     }
 

@@ -11,6 +11,12 @@ class CurveTooLarge extends RuntimeException {
         this.limitBytes = limitBytes;
     }
 
+    /** With a message of its own, e.g. for a batch of curve files. */
+    CurveTooLarge(String message, long limitBytes) {
+        super(message);
+        this.limitBytes = limitBytes;
+    }
+
     long limitBytes() {
         return limitBytes;
     }

@@ -16,6 +16,7 @@ public record ResultFlag(String code, String message, List<String> properties) {
     public static final String CALIBRATION_NO_LONGER_VALID = "CALIBRATION_NO_LONGER_VALID";
     public static final String TEMPERATURE_OUTSIDE_RANGE = "TEMPERATURE_OUTSIDE_RANGE";
     public static final String STRAIN_RATE_OUTSIDE_RANGE = "STRAIN_RATE_OUTSIDE_RANGE";
+    public static final String STRESS_RATE_OUTSIDE_RANGE = "STRESS_RATE_OUTSIDE_RANGE";
     public static final String FRACTURE_OUTSIDE_VALID_ZONE = "FRACTURE_OUTSIDE_VALID_ZONE";
     public static final String ELONGATION_FROM_EXTENSOMETER = "ELONGATION_FROM_EXTENSOMETER";
     public static final String FORCE_OUTSIDE_CALIBRATED_RANGE = "FORCE_OUTSIDE_CALIBRATED_RANGE";

@@ -5,6 +5,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.specimenledger.analysis.AnalysisWarning;
+import org.specimenledger.analysis.ControlRateCheck;
+import org.specimenledger.analysis.ControlRateRule;
 import org.specimenledger.analysis.CyclicResult;
 import org.specimenledger.analysis.LoadingCycle;
 import org.specimenledger.analysis.PropertyResult;
@@ -21,8 +23,9 @@ final class ResultFlags {
     private ResultFlags() {
     }
 
-    static List<ResultFlag> of(RunConditions run, GeometryUsed geometry, List<CalibrationUsed> calibrations,
-            TensileResult tensile, CyclicResult cyclic) {
+    static List<ResultFlag> of(StandardRequirements table, RunConditions run, GeometryUsed geometry,
+            List<CalibrationUsed> calibrations, TensileResult tensile, CyclicResult cyclic,
+            List<ControlRateCheck> controlRates) {
         List<ResultFlag> flags = new ArrayList<>();
         if (run.overrideReason() != null) {
             flags.add(new ResultFlag(ResultFlag.CALIBRATION_OVERRIDE, "the calibration gate refused this run and "
@@ -36,14 +39,15 @@ final class ResultFlags {
                 }
             }
         }
-        StandardRequirements.Requirement req = StandardRequirements.of(run.standard());
-        if (StandardRequirements.temperatureOutside(run.standard(), run.temperatureC())) {
+        StandardRequirements.Requirement req = table.of(run.standard());
+        if (table.temperatureOutside(run.standard(), run.temperatureC())) {
             flags.add(new ResultFlag(ResultFlag.TEMPERATURE_OUTSIDE_RANGE, "test temperature "
                     + run.temperatureC().toPlainString() + " °C is outside " + req.minTemperatureC().toPlainString()
                     + "–" + req.maxTemperatureC().toPlainString() + " °C (" + req.source() + ")", null));
         }
         if (tensile != null) {
             tensileFlags(run, geometry, tensile, flags);
+            controlRateFlags(controlRates, tensile, flags);
             forceRange(calibrations, tensile.property("Fm").isDetermined() ? tensile.property("Fm").value()
                     : Double.NaN, flags);
         }
@@ -135,6 +139,30 @@ final class ResultFlags {
             case "EXTENSOMETER_FROZEN" -> List.of("Agt", "Ag", "At", "A");
             default -> null;
         };
+    }
+
+    /**
+     * A method B or ASTM rate outside its range. For ASTM, up to yield either the rate of stressing or the
+     * rate of straining may be the controlled one, so that phase is flagged only when neither is in range.
+     */
+    private static void controlRateFlags(List<ControlRateCheck> checks, TensileResult r, List<ResultFlag> flags) {
+        boolean astmYieldMet = checks.stream().anyMatch(c -> c.rule().name().startsWith("ASTM")
+                && c.rule().phase() == StrainRatePhase.ELASTIC && Boolean.TRUE.equals(c.withinRange()));
+        for (ControlRateCheck c : checks) {
+            if (!Boolean.FALSE.equals(c.withinRange())) {
+                continue;
+            }
+            if (astmYieldMet && c.rule().name().startsWith("ASTM") && c.rule().phase() == StrainRatePhase.ELASTIC) {
+                continue;
+            }
+            String code = c.rule().quantity() == ControlRateRule.Quantity.STRESS_RATE
+                    ? ResultFlag.STRESS_RATE_OUTSIDE_RANGE : ResultFlag.STRAIN_RATE_OUTSIDE_RANGE;
+            String unit = c.rule().quantity().unit();
+            flags.add(new ResultFlag(code, c.rule().name() + ": " + (c.rule().quantity()
+                    == ControlRateRule.Quantity.STRESS_RATE ? "stress rate " : "strain rate ") + number(c.measured())
+                    + " " + unit + " is outside " + number(c.rule().lower()) + "–" + number(c.rule().upper()) + " "
+                    + unit + " (" + c.rule().source() + ")", propertiesOf(c.rule().phase(), r)));
+        }
     }
 
     private static void forceRange(List<CalibrationUsed> calibrations, double maxForceN, List<ResultFlag> flags) {

@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.UUID;
 import org.specimenledger.shared.CurrentUser;
+import org.specimenledger.shared.Paged;
 import org.specimenledger.shared.RuleViolation;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Component;
@@ -35,32 +36,52 @@ class ResultQueries {
         this.jdbc = jdbc;
     }
 
+    /** Every matching result, for the CSV export. */
     @Transactional(readOnly = true)
     List<ResultRow> find(Criteria c) {
+        return query(c, -1, -1).items();
+    }
+
+    /** One page of the matching results, in the order of {@link #find}, with the total count. */
+    @Transactional(readOnly = true)
+    Paged<ResultRow> find(Criteria c, int page, int size) {
+        Paged.check(page, size);
+        return query(c, page, size);
+    }
+
+    private Paged<ResultRow> query(Criteria c, int page, int size) {
         if (c.from() != null && c.to() != null && c.from().isAfter(c.to())) {
             throw new RuleViolation("from", "the range starts on " + c.from() + ", after its end " + c.to());
         }
-        StringBuilder sql = new StringBuilder("""
-                SELECT t.id, t.specimen_id, s.lab_identifier, s.heat_id, s.order_id, t.tested_at, t.test_date,
-                       t.standard, t.mode, t.validity, a.id, a.software_version, a.software_commit, a.method_version,
-                       a.input_sha256, a.results::text, a.flags::text
+        StringBuilder where = new StringBuilder("""
                 FROM test_run t
                 JOIN specimen s ON s.id = t.specimen_id
                 JOIN analysis_run a ON a.id = t.current_analysis_id
                 WHERE TRUE
                 """);
         List<Object> params = new ArrayList<>();
-        condition(sql, params, "t.specimen_id = ?", c.specimenId());
-        condition(sql, params, "s.heat_id = ?", c.heatId());
-        condition(sql, params, "s.order_id = ?", c.orderId());
-        condition(sql, params, "t.test_date >= ?", c.from());
-        condition(sql, params, "t.test_date <= ?", c.to());
-        condition(sql, params, "s.customer_id = ?", CurrentUser.customerOrganisation().orElse(null));
+        condition(where, params, "t.specimen_id = ?", c.specimenId());
+        condition(where, params, "s.heat_id = ?", c.heatId());
+        condition(where, params, "s.order_id = ?", c.orderId());
+        condition(where, params, "t.test_date >= ?", c.from());
+        condition(where, params, "t.test_date <= ?", c.to());
+        condition(where, params, "s.customer_id = ?", CurrentUser.customerOrganisation().orElse(null));
         if (!c.includeInvalid()) {
-            sql.append(" AND t.validity = 'VALID'");
+            where.append(" AND t.validity = 'VALID'");
         }
-        sql.append(" ORDER BY t.test_date, t.tested_at, s.lab_identifier");
-        return jdbc.sql(sql.toString()).params(params).query(ResultQueries::row).list();
+        String select = """
+                SELECT t.id, t.specimen_id, s.lab_identifier, s.heat_id, s.order_id, t.tested_at, t.test_date,
+                       t.standard, t.mode, t.validity, a.id, a.software_version, a.software_commit, a.method_version,
+                       a.input_sha256, a.results::text, a.flags::text
+                """ + where + " ORDER BY t.test_date, t.tested_at, s.lab_identifier, t.id";
+        if (size < 0) {
+            List<ResultRow> all = jdbc.sql(select).params(params).query(ResultQueries::row).list();
+            return new Paged<>(all, 0, all.size(), all.size());
+        }
+        long total = jdbc.sql("SELECT count(*) " + where).params(params).query(Long.class).single();
+        List<ResultRow> items = jdbc.sql(select + " LIMIT " + size + " OFFSET " + ((long) page * size)).params(params)
+                .query(ResultQueries::row).list();
+        return new Paged<>(items, page, size, total);
     }
 
     private static void condition(StringBuilder sql, List<Object> params, String clause, Object value) {

@@ -36,13 +36,16 @@ class ResultsController {
 
     @GetMapping("/results")
     @PreAuthorize(Access.ANY_SIGNED_IN)
-    @Operation(summary = "Results (current analysis of each test run) by specimenId, heatId, orderId, from, to")
-    List<ResultRow> results(@RequestParam(required = false) UUID specimenId,
+    @Operation(summary = "Results (current analysis of each test run) by specimenId, heatId, orderId, from, to; "
+            + "one page (page from 0, size 1–500, default 100) in test-date order, with the total")
+    org.specimenledger.shared.Paged<ResultRow> results(@RequestParam(required = false) UUID specimenId,
             @RequestParam(required = false) UUID heatId, @RequestParam(required = false) UUID orderId,
             @RequestParam(required = false) @DateTimeFormat(iso = DateTimeFormat.ISO.DATE) LocalDate from,
             @RequestParam(required = false) @DateTimeFormat(iso = DateTimeFormat.ISO.DATE) LocalDate to,
-            @RequestParam(defaultValue = "false") boolean includeInvalid) {
-        return queries.find(new ResultQueries.Criteria(specimenId, heatId, orderId, from, to, includeInvalid));
+            @RequestParam(defaultValue = "false") boolean includeInvalid,
+            @RequestParam(defaultValue = "0") int page, @RequestParam(defaultValue = "100") int size) {
+        return queries.find(new ResultQueries.Criteria(specimenId, heatId, orderId, from, to, includeInvalid), page,
+                size);
     }
 
     @GetMapping("/results.csv")

@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
+import org.specimenledger.analysis.ControlRateRule;
+import org.specimenledger.analysis.ControlRateRules;
 
 /**
  * What each standard asks of the equipment and the test conditions, in one place with the source and
@@ -16,6 +18,10 @@ import java.util.regex.Pattern;
  *
  * <p>Classes are compared by their number: 0.5 is better than 1, 1 better than 2. A {@code null} class
  * limit means the standard sets no class rule beyond a calibration valid on the test date.
+ *
+ * <p>The values below are the defaults ({@link #DEFAULTS}); a laboratory replaces any of them through
+ * {@link StandardSettings} ({@code ledger.standards.<standard>.*}) once it has confirmed them against its own
+ * copy of the standard, and the service uses that table ({@link #with}).
  */
 final class StandardRequirements {
 
@@ -37,6 +43,9 @@ final class StandardRequirements {
 
     private static final Map<TestStandard, Requirement> TABLE = new EnumMap<>(TestStandard.class);
 
+    /** The table as written below, with the sources and marks of its values. */
+    static final StandardRequirements DEFAULTS;
+
     static {
         // ISO 6892-1 asks for a class 1 force-measuring system (ISO 7500-1) [M], extensometer class 1 for
         // ReH, ReL, Rp, Rt, Ae and class 2 for Ag, Agt, A, At (ISO 9513) [M]; 10–35 °C [M for 6892-1; S in
@@ -56,6 +65,97 @@ final class StandardRequirements {
                 "ISO 37 with the ISO 23529 laboratory temperature 23 ± 2 °C [M]; no class rule"));
         TABLE.put(TestStandard.OTHER, new Requirement(null, null, null, null, null,
                 "other procedure: a valid calibration only, no class or temperature rule"));
+        DEFAULTS = new StandardRequirements(TABLE);
+    }
+
+    private final Map<TestStandard, Requirement> table;
+    private final ControlRateRules rates;
+
+    private StandardRequirements(Map<TestStandard, Requirement> table) {
+        this(table, ControlRateRules.defaults());
+    }
+
+    private StandardRequirements(Map<TestStandard, Requirement> table, ControlRateRules rates) {
+        this.table = Map.copyOf(table);
+        this.rates = rates;
+    }
+
+    /** The rate rules of the method B and ASTM checks. */
+    ControlRateRules rates() {
+        return rates;
+    }
+
+    private static ControlRateRules rates(ControlRateRules d, Map<String, StandardSettings.Range> given) {
+        if (given == null || given.isEmpty()) {
+            return d;
+        }
+        java.util.Map<String, ControlRateRule> byKey = new java.util.LinkedHashMap<>();
+        byKey.put("iso-b-elastic-low-modulus", d.isoBElasticLowModulus());
+        byKey.put("iso-b-elastic-high-modulus", d.isoBElasticHighModulus());
+        byKey.put("iso-b-yield", d.isoBYield());
+        byKey.put("iso-b-hardening", d.isoBHardening());
+        byKey.put("astm-yield-stressing", d.astmYieldStressing());
+        byKey.put("astm-yield-straining", d.astmYieldStraining());
+        byKey.put("astm-tensile-strength", d.astmTensileStrength());
+        given.forEach((key, range) -> {
+            ControlRateRule rule = byKey.get(key);
+            if (rule == null) {
+                throw new IllegalArgumentException("ledger.standards.rates." + key + " names no rate rule; the rules are "
+                        + byKey.keySet());
+            }
+            byKey.put(key, ControlRateRules.ranged(rule, range.lower() == null ? rule.lower() : range.lower(),
+                    range.upper() == null ? rule.upper() : range.upper()));
+        });
+        return new ControlRateRules(byKey.get("iso-b-elastic-low-modulus"), byKey.get("iso-b-elastic-high-modulus"),
+                byKey.get("iso-b-yield"), byKey.get("iso-b-hardening"), byKey.get("astm-yield-stressing"),
+                byKey.get("astm-yield-straining"), byKey.get("astm-tensile-strength"));
+    }
+
+    /**
+     * This table with the laboratory's own values where configured. A class or temperature given as
+     * {@code none} removes that rule; the source then says the value was configured.
+     */
+    StandardRequirements with(StandardSettings settings) {
+        Map<TestStandard, Requirement> out = new EnumMap<>(table);
+        if (settings == null || (settings.requirements() == null && settings.rates() == null)) {
+            return this;
+        }
+        ControlRateRules configuredRates = rates(rates, settings.rates());
+        (settings.requirements() == null ? Map.<TestStandard, StandardSettings.Given>of() : settings.requirements())
+                .forEach((standard, given) -> {
+            Requirement d = out.get(standard);
+            Requirement r = new Requirement(
+                    pick(given.forceClass(), d.forceClass()),
+                    pick(given.extensometerClassForStrengths(), d.extensometerClassForStrengths()),
+                    pick(given.extensometerClassForElongations(), d.extensometerClassForElongations()),
+                    decimal(given.minTemperatureC(), d.minTemperatureC()),
+                    decimal(given.maxTemperatureC(), d.maxTemperatureC()),
+                    "laboratory configuration (ledger.standards) over: " + d.source());
+            if (r.equals(new Requirement(d.forceClass(), d.extensometerClassForStrengths(),
+                    d.extensometerClassForElongations(), d.minTemperatureC(), d.maxTemperatureC(), r.source()))) {
+                return; // nothing actually changed: keep the default's source
+            }
+            out.put(standard, r);
+        });
+        return new StandardRequirements(out, configuredRates);
+    }
+
+    private static String pick(String given, String fallback) {
+        if (given == null || given.isBlank()) {
+            return fallback;
+        }
+        if (given.trim().equalsIgnoreCase("none")) {
+            return null;
+        }
+        new BigDecimal(given.trim()); // a class is a number; refuse anything else at start
+        return given.trim();
+    }
+
+    private static BigDecimal decimal(String given, BigDecimal fallback) {
+        if (given == null || given.isBlank()) {
+            return fallback;
+        }
+        return given.trim().equalsIgnoreCase("none") ? null : new BigDecimal(given.trim());
     }
 
     /**
@@ -75,11 +175,8 @@ final class StandardRequirements {
     static final List<String> KNOWN_PROPERTIES = List.of("E", "ReH", "ReL", "Rp0.2", "Rt0.5", "Fm", "Rm", "Ae", "Agt",
             "Ag", "At", "A", "Z", "W");
 
-    private StandardRequirements() {
-    }
-
-    static Requirement of(TestStandard standard) {
-        return TABLE.get(standard);
+    Requirement of(TestStandard standard) {
+        return table.get(standard);
     }
 
     /** Whether a property symbol is one this laboratory reports (Rp and Rt with any offset). */
@@ -94,7 +191,7 @@ final class StandardRequirements {
      *
      * @return a class such as "1", or null when the standard or those properties need no class
      */
-    static String extensometerClassFor(TestStandard standard, Collection<String> reported) {
+    String extensometerClassFor(TestStandard standard, Collection<String> reported) {
         Requirement r = of(standard);
         boolean strengths = reported == null || reported.stream().anyMatch(p -> STRENGTH_PROPERTIES.matcher(p).matches());
         boolean elongations = reported == null || reported.stream().anyMatch(ELONGATION_PROPERTIES::contains);
@@ -117,7 +214,7 @@ final class StandardRequirements {
     }
 
     /** Whether the test temperature lies outside the standard's range (ends included in the range). */
-    static boolean temperatureOutside(TestStandard standard, BigDecimal temperatureC) {
+    boolean temperatureOutside(TestStandard standard, BigDecimal temperatureC) {
         Requirement r = of(standard);
         return (r.minTemperatureC() != null && temperatureC.compareTo(r.minTemperatureC()) < 0)
                 || (r.maxTemperatureC() != null && temperatureC.compareTo(r.maxTemperatureC()) > 0);

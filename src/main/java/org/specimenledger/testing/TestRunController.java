@@ -44,12 +44,40 @@ class TestRunController {
     private final CurveIntake intake;
     private final AnalysisService analyses;
     private final AnalysisReplay replay;
+    private final CurveBatch batches;
+    private final ReanalysisJobs reanalyses;
 
-    TestRunController(TestRunService runs, CurveIntake intake, AnalysisService analyses, AnalysisReplay replay) {
+    TestRunController(TestRunService runs, CurveIntake intake, AnalysisService analyses, AnalysisReplay replay,
+            CurveBatch batches, ReanalysisJobs reanalyses) {
+        this.reanalyses = reanalyses;
         this.runs = runs;
         this.intake = intake;
         this.analyses = analyses;
         this.replay = replay;
+        this.batches = batches;
+    }
+
+    // any Content-Type reaches the handler (a role without access gets its 403 first); anything but a zip is 415
+    @PostMapping(path = "/orders/{orderId}/curves", consumes = MediaType.ALL_VALUE)
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Upload many curve files of an order as one zip; each entry named <specimen mark>.<ext> "
+            + "goes to that specimen's valid test run exactly as a single upload would. Answers at once with the "
+            + "job (202, Location of the job); entries that fail are reported one by one in the job's summary")
+    @io.swagger.v3.oas.annotations.parameters.RequestBody(required = true, description = "A zip of curve files, "
+            + "each named <specimen mark>.<extension> (folders allowed, ignored for matching)", content =
+            @io.swagger.v3.oas.annotations.media.Content(mediaType = "application/zip",
+                    schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")))
+    ResponseEntity<org.specimenledger.jobs.JobView> uploadBatch(@PathVariable UUID orderId,
+            HttpServletRequest request) throws IOException, org.springframework.web.HttpMediaTypeNotSupportedException {
+        List<MediaType> zip = List.of(MediaType.parseMediaType("application/zip"),
+                MediaType.parseMediaType("application/x-zip-compressed"));
+        MediaType given = request.getContentType() == null ? null : mediaType(request.getContentType());
+        if (given == null || zip.stream().noneMatch(m -> m.includes(given))) {
+            throw new org.springframework.web.HttpMediaTypeNotSupportedException(given, zip);
+        }
+        org.specimenledger.jobs.JobView job = batches.receive(orderId, request.getInputStream(),
+                request.getContentLengthLong());
+        return ResponseEntity.accepted().location(java.net.URI.create("/api/v1/jobs/" + job.id())).body(job);
     }
 
     @PostMapping("/tests")
@@ -63,9 +91,11 @@ class TestRunController {
 
     @GetMapping("/tests")
     @PreAuthorize(Access.ANY_SIGNED_IN)
-    @Operation(summary = "List test runs, optionally of one specimen (a customer sees only their own organisation's)")
-    List<TestRunView> list(@RequestParam(required = false) UUID specimenId) {
-        return runs.list(specimenId);
+    @Operation(summary = "List test runs, optionally of one specimen, oldest first; one page (page from 0, size "
+            + "1–500, default 100) with the total (a customer sees only their own organisation's)")
+    org.specimenledger.shared.Paged<TestRunView> list(@RequestParam(required = false) UUID specimenId,
+            @RequestParam(defaultValue = "0") int page, @RequestParam(defaultValue = "100") int size) {
+        return runs.list(specimenId, page, size);
     }
 
     @GetMapping("/tests/{id}")
@@ -94,10 +124,27 @@ class TestRunController {
     @Operation(summary = "Upload the raw curve file as the request body, byte for byte (once per run); the "
             + "first analysis is made at once. Same bytes as another run: 409 unless confirmDuplicate=true "
             + "with a reason")
+    @io.swagger.v3.oas.annotations.parameters.RequestBody(required = true, description = "The curve file exactly as "
+            + "the testing machine wrote it (UTF-8 text: optional # lines, a header row naming each channel with its "
+            + "unit in brackets, then data rows), sent as the whole body, not as a form. Stored byte for byte; "
+            + "at most ledger.curves.max-size (a larger Content-Length is refused with 413 before reading)",
+            content = {
+                @io.swagger.v3.oas.annotations.media.Content(mediaType = "text/csv",
+                        schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")),
+                @io.swagger.v3.oas.annotations.media.Content(mediaType = "text/tab-separated-values",
+                        schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")),
+                @io.swagger.v3.oas.annotations.media.Content(mediaType = "text/plain",
+                        schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary")),
+                @io.swagger.v3.oas.annotations.media.Content(mediaType = "application/octet-stream",
+                        schema = @io.swagger.v3.oas.annotations.media.Schema(type = "string", format = "binary"))})
     CurveIntake.Received upload(@PathVariable UUID id, HttpServletRequest request,
-            @RequestParam(defaultValue = "false") boolean confirmDuplicate,
-            @RequestParam(required = false) String reason,
-            @RequestParam(required = false) String filename,
+            @io.swagger.v3.oas.annotations.Parameter(description = "true to store bytes identical to another run's "
+                    + "curve (then reason is required)") @RequestParam(defaultValue = "false") boolean confirmDuplicate,
+            @io.swagger.v3.oas.annotations.Parameter(description = "why identical bytes are stored (with "
+                    + "confirmDuplicate=true); the ledger event's reason") @RequestParam(required = false) String reason,
+            @io.swagger.v3.oas.annotations.Parameter(description = "the file's original name, when no "
+                    + "Content-Disposition header gives it") @RequestParam(required = false) String filename,
+            @io.swagger.v3.oas.annotations.Parameter(description = "e.g. attachment; filename=\"run-0412.csv\"")
             @RequestHeader(name = HttpHeaders.CONTENT_DISPOSITION, required = false) String disposition)
             throws IOException {
         String name = filename;
@@ -154,6 +201,16 @@ class TestRunController {
     AnalysisRunView pointCurrent(@PathVariable UUID id,
             @Valid @RequestBody TestRunRequests.CurrentAnalysisRequest request) {
         return analyses.pointCurrent(id, request);
+    }
+
+    @PostMapping("/analyses/reanalysis-jobs")
+    @PreAuthorize(Access.LAB_WORKERS)
+    @Operation(summary = "Re-analyse every test run matching a filter as one job (reason required): each run gets a "
+            + "new analysis that becomes current, nothing is overwritten; 202 with the job")
+    ResponseEntity<org.specimenledger.jobs.JobView> reanalyseMany(
+            @Valid @RequestBody ReanalysisJobs.ReanalysisRequest request) {
+        org.specimenledger.jobs.JobView job = reanalyses.submit(request);
+        return ResponseEntity.accepted().location(java.net.URI.create("/api/v1/jobs/" + job.id())).body(job);
     }
 
     @GetMapping("/analyses/{id}")

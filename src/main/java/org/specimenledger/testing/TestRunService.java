@@ -13,6 +13,7 @@ import org.specimenledger.equipment.EquipmentDirectory;
 import org.specimenledger.equipment.EquipmentView;
 import org.specimenledger.shared.ChangeReason;
 import org.specimenledger.shared.CurrentUser;
+import org.specimenledger.shared.Paged;
 import org.specimenledger.shared.RecordNotFound;
 import org.specimenledger.shared.Role;
 import org.specimenledger.shared.RuleViolation;
@@ -41,9 +42,14 @@ public class TestRunService {
     private final SpecimenDirectory specimens;
     private final Ledger ledger;
     private final Clock clock;
+    private final StandardRequirements requirements;
+    private final org.springframework.jdbc.core.simple.JdbcClient jdbc;
 
     TestRunService(TestRunRepository runs, CurveFileRepository curves, TestRunRules rules, EquipmentDirectory equipment,
-            SpecimenDirectory specimens, Ledger ledger, Clock clock) {
+            SpecimenDirectory specimens, Ledger ledger, Clock clock, StandardRequirements requirements,
+            org.springframework.jdbc.core.simple.JdbcClient jdbc) {
+        this.requirements = requirements;
+        this.jdbc = jdbc;
         this.runs = runs;
         this.curves = curves;
         this.rules = rules;
@@ -67,7 +73,7 @@ public class TestRunService {
         }
         TestRunRules.Checked checked = rules.checked(request, now());
         List<CalibrationUsed> used = calibrationsOn(checked);
-        List<CalibrationGate.Finding> findings = CalibrationGate.check(used, request.standard(),
+        List<CalibrationGate.Finding> findings = CalibrationGate.check(requirements, used, request.standard(),
                 checked.facts().reportedProperties());
         if (!findings.isEmpty() && override == null) {
             throw new CalibrationNotValid(findings);
@@ -151,16 +157,30 @@ public class TestRunService {
         return view(visible(id));
     }
 
-    /** Runs of one specimen, or all runs the caller may see, oldest first. */
+    /**
+     * One page of test runs, oldest registration first (then by id, a stable order), optionally of one
+     * specimen; a customer's pages hold only their own organisation's runs.
+     */
     @Transactional(readOnly = true)
-    List<TestRunView> list(UUID specimenId) {
-        List<TestRun> found = specimenId == null ? runs.findAllByOrderByCreatedAtAsc()
-                : runs.findAllBySpecimenIdOrderByCreatedAtAsc(specimenId);
+    Paged<TestRunView> list(UUID specimenId, int page, int size) {
+        Paged.check(page, size);
+        StringBuilder where = new StringBuilder(" FROM test_run t JOIN specimen s ON s.id = t.specimen_id WHERE TRUE");
+        java.util.List<Object> params = new java.util.ArrayList<>();
+        if (specimenId != null) {
+            where.append(" AND t.specimen_id = ?");
+            params.add(specimenId);
+        }
         Optional<UUID> scope = CurrentUser.customerOrganisation();
-        return found.stream()
-                .filter(r -> scope.isEmpty() || scope.equals(specimens.find(r.specimenId()).map(SpecimenView::customerId)))
-                .map(this::view)
-                .toList();
+        if (scope.isPresent()) {
+            where.append(" AND s.customer_id = ?");
+            params.add(scope.get());
+        }
+        long total = jdbc.sql("SELECT count(*)" + where).params(params).query(Long.class).single();
+        List<UUID> ids = jdbc.sql("SELECT t.id" + where + " ORDER BY t.created_at, t.id LIMIT " + size + " OFFSET "
+                + ((long) page * size)).params(params).query(UUID.class).list();
+        java.util.Map<UUID, TestRun> found = new java.util.HashMap<>();
+        runs.findAllById(ids).forEach(r -> found.put(r.id(), r));
+        return new Paged<>(ids.stream().map(found::get).map(this::view).toList(), page, size, total);
     }
 
     /** The run, if the caller may see it: a customer only their own organisation's, otherwise 404. */

@@ -178,7 +178,7 @@ class AnalysisApiTest extends TestRunTesting {
 
         for (String query : List.of("specimenId=" + b.specimenId(), "heatId=" + b.heatId(), "orderId=" + b.orderId(),
                 "orderId=" + b.orderId() + "&from=" + TODAY.minusDays(1) + "&to=" + TODAY.minusDays(1))) {
-            JsonNode rows = technician().get("/api/v1/results?" + query).json();
+            JsonNode rows = technician().get("/api/v1/results?" + query).json().get("items");
             assertThat(rows).as(query).hasSize(1);
             JsonNode row = rows.get(0);
             assertThat(row.get("testRunId").asString()).isEqualTo(id);
@@ -187,7 +187,7 @@ class AnalysisApiTest extends TestRunTesting {
             assertThat(row.get("properties").get("Rp0.2").get("reported").asString()).isEqualTo("300");
             assertThat(row.get("properties").get("Rp0.2").get("unit").asString()).isEqualTo("MPa");
         }
-        assertThat(technician().get("/api/v1/results?orderId=" + b.orderId() + "&from=" + TODAY).json()).isEmpty();
+        assertThat(technician().get("/api/v1/results?orderId=" + b.orderId() + "&from=" + TODAY).json().get("items")).isEmpty();
         assertProblem(technician().get("/api/v1/results?from=" + TODAY + "&to=" + TODAY.minusDays(3)), 422, "from",
                 "after its end");
 
@@ -206,8 +206,8 @@ class AnalysisApiTest extends TestRunTesting {
 
         // an invalidated run drops out unless asked for
         technician().post("/api/v1/tests/" + id + "/invalidate", Map.of("reason", "extensometer knife slipped"));
-        assertThat(technician().get("/api/v1/results?specimenId=" + b.specimenId()).json()).isEmpty();
-        assertThat(technician().get("/api/v1/results?specimenId=" + b.specimenId() + "&includeInvalid=true").json()
+        assertThat(technician().get("/api/v1/results?specimenId=" + b.specimenId()).json().get("items")).isEmpty();
+        assertThat(technician().get("/api/v1/results?specimenId=" + b.specimenId() + "&includeInvalid=true").json().get("items")
                 .get(0).get("validity").asString()).isEqualTo("INVALID");
     }
 }

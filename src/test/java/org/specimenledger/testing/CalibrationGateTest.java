@@ -86,13 +86,36 @@ class CalibrationGateTest {
     @Test
     void temperatureRangesPerStandard() {
         // ISO 6892-1 10–35 °C [M]; ASTM E8 10–38 °C [S]; ISO 37 via ISO 23529 23 ± 2 °C [M]; ends are inside
-        assertThat(StandardRequirements.temperatureOutside(TestStandard.ISO_6892_1, new BigDecimal("35"))).isFalse();
-        assertThat(StandardRequirements.temperatureOutside(TestStandard.ISO_6892_1, new BigDecimal("35.1"))).isTrue();
-        assertThat(StandardRequirements.temperatureOutside(TestStandard.ISO_6892_1, new BigDecimal("9.9"))).isTrue();
-        assertThat(StandardRequirements.temperatureOutside(TestStandard.ASTM_E8, new BigDecimal("38"))).isFalse();
-        assertThat(StandardRequirements.temperatureOutside(TestStandard.ASTM_E8M, new BigDecimal("38.5"))).isTrue();
-        assertThat(StandardRequirements.temperatureOutside(TestStandard.ISO_37, new BigDecimal("25.5"))).isTrue();
-        assertThat(StandardRequirements.temperatureOutside(TestStandard.OTHER, new BigDecimal("-40"))).isFalse();
+        assertThat(StandardRequirements.DEFAULTS.temperatureOutside(TestStandard.ISO_6892_1, new BigDecimal("35"))).isFalse();
+        assertThat(StandardRequirements.DEFAULTS.temperatureOutside(TestStandard.ISO_6892_1, new BigDecimal("35.1"))).isTrue();
+        assertThat(StandardRequirements.DEFAULTS.temperatureOutside(TestStandard.ISO_6892_1, new BigDecimal("9.9"))).isTrue();
+        assertThat(StandardRequirements.DEFAULTS.temperatureOutside(TestStandard.ASTM_E8, new BigDecimal("38"))).isFalse();
+        assertThat(StandardRequirements.DEFAULTS.temperatureOutside(TestStandard.ASTM_E8M, new BigDecimal("38.5"))).isTrue();
+        assertThat(StandardRequirements.DEFAULTS.temperatureOutside(TestStandard.ISO_37, new BigDecimal("25.5"))).isTrue();
+        assertThat(StandardRequirements.DEFAULTS.temperatureOutside(TestStandard.OTHER, new BigDecimal("-40"))).isFalse();
+    }
+
+    @Test
+    void theLaboratorysConfiguredValuesReplaceOnlyWhatTheyName() {
+        StandardRequirements table = StandardRequirements.DEFAULTS.with(new StandardSettings(java.util.Map.of(
+                TestStandard.ISO_6892_1, new StandardSettings.Given("0.5", null, null, null, "30"),
+                TestStandard.ISO_37, new StandardSettings.Given("none", null, null, "none", "none")),
+                java.util.Map.of("iso-b-yield", new StandardSettings.Range(null, 0.003))));
+        assertThat(table.rates().isoBYield().upper()).isEqualTo(0.003);
+        assertThat(table.rates().isoBYield().lower()).as("a bound not given keeps its default").isEqualTo(0.00025);
+        assertThat(table.rates().isoBYield().source()).startsWith("laboratory configuration over ");
+        assertThat(table.rates().isoBHardening()).isEqualTo(org.specimenledger.analysis.StrainRates.ISO_B_HARDENING);
+        assertThat(org.assertj.core.api.Assertions.catchThrowable(() -> StandardRequirements.DEFAULTS.with(
+                new StandardSettings(null, java.util.Map.of("iso-b-nonsense", new StandardSettings.Range(1.0, 2.0))))))
+                .hasMessageContaining("names no rate rule");
+        assertThat(CalibrationGate.check(table, bench("1", "1"), TestStandard.ISO_6892_1, null)).singleElement()
+                .satisfies(x -> assertThat(x.reason()).contains("needs class 0.5 or better")
+                        .contains("laboratory configuration"));
+        assertThat(table.temperatureOutside(TestStandard.ISO_6892_1, new BigDecimal("31"))).isTrue();
+        assertThat(table.temperatureOutside(TestStandard.ISO_6892_1, new BigDecimal("10"))).isFalse();
+        assertThat(table.temperatureOutside(TestStandard.ISO_37, new BigDecimal("40"))).isFalse();
+        assertThat(table.of(TestStandard.ASTM_E8)).isEqualTo(StandardRequirements.DEFAULTS.of(TestStandard.ASTM_E8));
+        assertThat(StandardRequirements.DEFAULTS.with(new StandardSettings(null, null))).isSameAs(StandardRequirements.DEFAULTS);
     }
 
     @Test

@@ -47,7 +47,7 @@ class TestRunAccessTest extends TestRunTesting {
             assertThat(reader.get(t + "/analyses").status()).isEqualTo(200);
             assertThat(reader.get(a).status()).isEqualTo(200);
             assertThat(reader.get("/api/v1/tests?specimenId=" + run.bench().specimenId()).status()).isEqualTo(200);
-            assertThat(reader.get("/api/v1/results?specimenId=" + run.bench().specimenId()).json()).hasSize(1);
+            assertThat(reader.get("/api/v1/results?specimenId=" + run.bench().specimenId()).json().get("items")).hasSize(1);
             assertThat(reader.get("/api/v1/results.csv?specimenId=" + run.bench().specimenId()).status()).isEqualTo(200);
         }
         assertThat(anonymous().get(t).status()).isEqualTo(401);
@@ -88,14 +88,14 @@ class TestRunAccessTest extends TestRunTesting {
         assertThat(customer.get(t + "/analyses").status()).isEqualTo(404);
         assertThat(customer.get("/api/v1/analyses/" + theirs.analysisId()).status()).isEqualTo(404);
         assertThat(customer.getBytes(t + "/curve").status()).isEqualTo(404);
-        assertThat(customer.get("/api/v1/results?specimenId=" + theirs.bench().specimenId()).json()).isEmpty();
-        assertThat(customer.get("/api/v1/tests?specimenId=" + theirs.bench().specimenId()).json()).isEmpty();
+        assertThat(customer.get("/api/v1/results?specimenId=" + theirs.bench().specimenId()).json().get("items")).isEmpty();
+        assertThat(customer.get("/api/v1/tests?specimenId=" + theirs.bench().specimenId()).json().get("items")).isEmpty();
         assertThat(customer.get("/api/v1/results.csv?specimenId=" + theirs.bench().specimenId()).body()
                 .split("\r\n")).hasSize(1);
 
-        JsonNode all = customer.get("/api/v1/tests").json();
+        JsonNode all = customer.get("/api/v1/tests?size=500").json().get("items");
         assertThat(all.valueStream().map(n -> n.get("id").asString())).contains(mine.id()).doesNotContain(theirs.id());
-        JsonNode results = customer.get("/api/v1/results").json();
+        JsonNode results = customer.get("/api/v1/results?size=500").json().get("items");
         assertThat(results.valueStream().map(n -> n.get("testRunId").asString())).contains(mine.id())
                 .doesNotContain(theirs.id());
         // and the other organisation's customer sees theirs, not mine

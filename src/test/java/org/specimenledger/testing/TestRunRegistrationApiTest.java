@@ -195,7 +195,7 @@ class TestRunRegistrationApiTest extends TestRunTesting {
         assertThat(events("test-run", second).get(0).get("reason").asString())
                 .isEqualTo("retest of " + first + ": specimen slipped in the grips");
 
-        assertThat(technician().get("/api/v1/tests?specimenId=" + b.specimenId()).json()
+        assertThat(technician().get("/api/v1/tests?specimenId=" + b.specimenId()).json().get("items")
                 .valueStream().map(n -> n.get("id").asString())).containsExactly(first, second);
     }
 

@@ -88,6 +88,12 @@ public final class Api {
                 .method(method, HttpRequest.BodyPublishers.ofByteArray(out.toByteArray())));
     }
 
+    /** POSTs raw bytes with a content type, e.g. an import sheet or a zip of curve files. */
+    public Response postBytes(String path, String contentType, byte[] bytes) {
+        return send(request(path).header("Content-Type", contentType)
+                .POST(HttpRequest.BodyPublishers.ofByteArray(bytes)));
+    }
+
     /** Sends raw bytes with a content type, e.g. a curve file uploaded as the whole body. */
     public Response putBytes(String path, String contentType, byte[] bytes, String... headers) {
         HttpRequest.Builder b = request(path).header("Content-Type", contentType)

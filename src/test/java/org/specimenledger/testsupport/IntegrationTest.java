@@ -11,7 +11,7 @@ import org.springframework.test.context.DynamicPropertySource;
  * shared by all subclasses, so tests make their own uniquely named records and never rely on others.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT,
-        properties = {"ledger.demo=off", "ledger.password-hash-strength=4", "logging.level.org.springframework.security=WARN"})
+        properties = {"ledger.demo=off", "ledger.password-hash-strength=4", "ledger.curves.warm-up=false", "logging.level.org.springframework.security=WARN"})
 public abstract class IntegrationTest {
 
     @LocalServerPort
