@@ -1,5 +1,7 @@
 package org.specimenledger.heats;
 
+import org.springframework.data.domain.Sort;
+import java.util.List;
 import java.util.Optional;
 import java.util.UUID;
 import org.springframework.stereotype.Component;
@@ -23,5 +25,11 @@ public class HeatDirectory {
     @Transactional(readOnly = true)
     public Optional<HeatView> find(UUID id) {
         return id == null ? Optional.empty() : heats.findById(id).map(HeatView::of);
+    }
+
+    /** Every heat by heat number, for the laboratory's pick lists (laboratory roles only, no customer scope). */
+    @Transactional(readOnly = true)
+    public List<HeatView> all() {
+        return heats.findAll(Sort.by("heatNumber")).stream().map(HeatView::of).toList();
     }
 }

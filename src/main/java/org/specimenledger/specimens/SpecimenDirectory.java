@@ -1,5 +1,8 @@
 package org.specimenledger.specimens;
 
+import org.springframework.data.domain.Sort;
+import org.springframework.data.domain.PageRequest;
+import java.util.List;
 import java.util.Optional;
 import java.util.UUID;
 import org.springframework.stereotype.Component;
@@ -21,5 +24,12 @@ public class SpecimenDirectory {
     @Transactional(readOnly = true)
     public Optional<SpecimenView> find(UUID id) {
         return id == null ? Optional.empty() : specimens.findById(id).map(SpecimenView::of);
+    }
+
+    /** The most recently registered specimens, newest first (laboratory pages; no customer scope). */
+    @Transactional(readOnly = true)
+    public List<SpecimenView> recent(int limit) {
+        return specimens.findAll(PageRequest.of(0, limit, Sort.by(Sort.Direction.DESC, "createdAt"))).stream()
+                .map(SpecimenView::of).toList();
     }
 }

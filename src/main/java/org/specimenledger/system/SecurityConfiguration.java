@@ -63,6 +63,7 @@ class SecurityConfiguration {
                         // the ledger's public key and latest signed checkpoint, for copies held outside the lab
                         .requestMatchers("/api/v1/ledger/key", "/api/v1/ledger/checkpoints/latest").permitAll()
                         .anyRequest().authenticated());
+        SecurityHeaders.apply(http, SecurityHeaders.API_POLICY);
         return http.build();
     }
 

@@ -17,11 +17,16 @@ public class TestRunDirectory {
     private final TestRunRepository runs;
     private final TestRunService service;
     private final AnalysisArchive archive;
+    private final AnalysisService analyses;
+    private final CurveIntake intake;
 
-    TestRunDirectory(TestRunRepository runs, TestRunService service, AnalysisArchive archive) {
+    TestRunDirectory(TestRunRepository runs, TestRunService service, AnalysisArchive archive,
+            AnalysisService analyses, CurveIntake intake) {
         this.runs = runs;
         this.service = service;
         this.archive = archive;
+        this.analyses = analyses;
+        this.intake = intake;
     }
 
     /** A specimen's valid test run with its current analysis, when both exist. */
@@ -62,5 +67,16 @@ public class TestRunDirectory {
     public Optional<ReportedResult> reportedResultOf(UUID specimenId) {
         return validRunOf(specimenId).flatMap(run -> currentAnalysisOf(run.id())
                 .map(analysis -> new ReportedResult(run, analysis)));
+    }
+
+    /** Every analysis of a run, oldest first. */
+    @Transactional(readOnly = true)
+    public List<AnalysisRunView> analysesOf(UUID testRunId) {
+        return analyses.ofTestRun(testRunId);
+    }
+
+    /** The run's raw curve bytes exactly as uploaded (404 before upload). */
+    public byte[] curveBytes(UUID testRunId) {
+        return intake.download(testRunId).bytes();
     }
 }
