@@ -13,7 +13,7 @@ record Navigation(List<Entry> entries) {
 
     /** One entry; {@code href} null while the feature it opens is not built. */
     record Entry(String label, String href, String waitingFor) {
-        boolean available() {
+        public boolean available() {
             return href != null;
         }
     }

@@ -35,7 +35,7 @@ class PageSecurity {
 
     @Bean
     @Order(1)
-    SecurityFilterChain pageSecurity(HttpSecurity http, SignInThrottle throttle,
+    SecurityFilterChain pageChain(HttpSecurity http, SignInThrottle throttle,
             @Value("${server.servlet.session.cookie.name:LEDGER_SESSION}") String cookieName) throws Exception {
         SavedRequestAwareAuthenticationSuccessHandler success = new SavedRequestAwareAuthenticationSuccessHandler();
         success.setDefaultTargetUrl("/");

@@ -25,7 +25,7 @@ record PropertyTable(List<Row> rows, List<Cycle> cycles, List<ResultFlag> flags)
 
     /** One symbol in two analyses; {@code differs} when the reported values are not the same. */
     record Pair(String symbol, Row left, Row right) {
-        boolean differs() {
+        public boolean differs() {
             return !Objects.equals(left == null ? null : left.reported(), right == null ? null : right.reported())
                     || !Objects.equals(left == null ? null : left.status(), right == null ? null : right.status());
         }
@@ -33,7 +33,7 @@ record PropertyTable(List<Row> rows, List<Cycle> cycles, List<ResultFlag> flags)
 
     /** One parameter in two analyses. */
     record ParameterPair(String key, String left, String right) {
-        boolean differs() {
+        public boolean differs() {
             return !Objects.equals(left, right);
         }
     }
