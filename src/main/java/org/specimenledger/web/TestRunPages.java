@@ -173,9 +173,7 @@ class TestRunPages {
 
     private String form(Model model, TestRunForm form, List<FieldIssue> problems, List<String> gate,
             HttpServletResponse response) {
-        if (response != null && (!problems.isEmpty() || !gate.isEmpty())) {
-            response.setStatus(422); // the form comes back with what to correct
-        }
+        // the form comes back (200, as a browser expects of a form page) with what to correct above it
         UUID specimenId = FormValues.uuid(form.getSpecimenId(), "", new ArrayList<>());
         SpecimenView specimen = specimenId == null ? null : specimens.find(specimenId).orElse(null);
         List<EquipmentView> all = equipment.all();
