@@ -127,7 +127,9 @@ record CurvePlot(String curvePath, String fitPath, List<Line> lines, List<Marker
     }
 
     private static Marker marker(String kind, String label, double x, double y) {
-        return new Marker(kind, label, x, y, x + 6, Math.max(TOP + 10, y - 8));
+        // the fracture label goes below its point: a curve that ends at its maximum puts it beside Fm
+        double labelY = kind.equals("fracture") ? Math.min(HEIGHT - BOTTOM - 4, y + 18) : Math.max(TOP + 10, y - 8);
+        return new Marker(kind, label, x, y, x + 6, labelY);
     }
 
     @SuppressWarnings("unchecked")
