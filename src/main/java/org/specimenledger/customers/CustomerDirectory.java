@@ -1,5 +1,7 @@
 package org.specimenledger.customers;
 
+import org.springframework.data.domain.Sort;
+import java.util.List;
 import java.util.Optional;
 import java.util.UUID;
 import org.springframework.stereotype.Component;
@@ -30,5 +32,11 @@ public class CustomerDirectory {
     @Transactional(readOnly = true)
     public Optional<OrderView> order(UUID id) {
         return id == null ? Optional.empty() : orders.findById(id).map(OrderView::of);
+    }
+
+    /** Every order, oldest first, for the laboratory's pick lists (no customer scope). */
+    @Transactional(readOnly = true)
+    public List<OrderView> allOrders() {
+        return orders.findAll(Sort.by("createdAt")).stream().map(OrderView::of).toList();
     }
 }

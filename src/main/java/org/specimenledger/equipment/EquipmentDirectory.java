@@ -1,5 +1,6 @@
 package org.specimenledger.equipment;
 
+import java.util.List;
 import java.time.LocalDate;
 import java.util.Optional;
 import java.util.UUID;
@@ -34,5 +35,10 @@ public class EquipmentDirectory {
      */
     public CalibrationOnDate calibrationOn(UUID equipmentId, LocalDate date) {
         return service.calibrationOn(equipmentId, date);
+    }
+
+    /** Every instrument with its calibration standing today. */
+    public List<EquipmentView> all() {
+        return service.list(null);
     }
 }

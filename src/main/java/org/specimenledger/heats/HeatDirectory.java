@@ -1,5 +1,6 @@
 package org.specimenledger.heats;
 
+import org.springframework.data.domain.Sort;
 import java.util.List;
 import java.util.Optional;
 import java.util.UUID;
@@ -32,5 +33,11 @@ public class HeatDirectory {
         return heatNumber == null || heatNumber.isBlank() ? List.of()
                 : heats.findAllByHeatNumberIgnoreCaseOrderByProducerAsc(heatNumber.trim()).stream().map(HeatView::of)
                         .toList();
+    }
+
+    /** Every heat by heat number, for the laboratory's pick lists (laboratory roles only, no customer scope). */
+    @Transactional(readOnly = true)
+    public List<HeatView> all() {
+        return heats.findAll(Sort.by("heatNumber")).stream().map(HeatView::of).toList();
     }
 }

@@ -1,5 +1,8 @@
 package org.specimenledger.specimens;
 
+import org.springframework.data.domain.Sort;
+import org.springframework.data.domain.PageRequest;
+import java.util.List;
 import java.util.Optional;
 import java.util.UUID;
 import org.springframework.stereotype.Component;
@@ -29,5 +32,12 @@ public class SpecimenDirectory {
         return mark == null || mark.isBlank() ? Optional.empty()
                 : specimens.findByLabIdentifierIgnoreCase(mark.trim()).filter(s -> s.orderId().equals(orderId))
                         .map(SpecimenView::of);
+    }
+
+    /** The most recently registered specimens, newest first (laboratory pages; no customer scope). */
+    @Transactional(readOnly = true)
+    public List<SpecimenView> recent(int limit) {
+        return specimens.findAll(PageRequest.of(0, limit, Sort.by(Sort.Direction.DESC, "createdAt"))).stream()
+                .map(SpecimenView::of).toList();
     }
 }

@@ -77,6 +77,7 @@ class SecurityConfiguration {
                         // certificate verification from the printed code or a PDF file (rate-limited)
                         .requestMatchers("/verify", "/verify/*").permitAll()
                         .anyRequest().authenticated());
+        SecurityHeaders.apply(http, SecurityHeaders.API_POLICY);
         return http.build();
     }
 

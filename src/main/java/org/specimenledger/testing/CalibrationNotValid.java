@@ -7,7 +7,7 @@ import java.util.stream.Collectors;
  * A test run refused by the calibration gate: which instruments fail and why. 422; a lab manager may
  * accept the run anyway with a written {@code calibrationOverrideReason}.
  */
-class CalibrationNotValid extends RuntimeException {
+public class CalibrationNotValid extends RuntimeException {
 
     private final List<CalibrationGate.Finding> findings;
 
@@ -18,5 +18,10 @@ class CalibrationNotValid extends RuntimeException {
 
     List<CalibrationGate.Finding> findings() {
         return findings;
+    }
+
+    /** One line per refused instrument, for people (the pages show them above the form). */
+    public List<String> lines() {
+        return findings.stream().map(CalibrationGate.Finding::line).toList();
     }
 }

@@ -22,9 +22,12 @@ public class TestRunDirectory {
     private final CurveContentStore contents;
     private final CurveSettings curveSettings;
     private final AnalysisReplay replay;
+    private final AnalysisService analyses;
+    private final CurveIntake intake;
 
     TestRunDirectory(TestRunRepository runs, TestRunService service, AnalysisArchive archive,
-            CurveFileRepository files, CurveContentStore contents, CurveSettings curveSettings, AnalysisReplay replay) {
+            CurveFileRepository files, CurveContentStore contents, CurveSettings curveSettings, AnalysisReplay replay,
+            AnalysisService analyses, CurveIntake intake) {
         this.runs = runs;
         this.service = service;
         this.archive = archive;
@@ -32,6 +35,8 @@ public class TestRunDirectory {
         this.contents = contents;
         this.curveSettings = curveSettings;
         this.replay = replay;
+        this.analyses = analyses;
+        this.intake = intake;
     }
 
     /** A run's raw curve read again from its stored bytes (for drawing it), when uploaded. */
@@ -94,5 +99,16 @@ public class TestRunDirectory {
     @Transactional(readOnly = true)
     public byte[] rawCurveBytes(UUID rawCurveId) {
         return contents.get(rawCurveId);
+    }
+
+    /** Every analysis of a run, oldest first. */
+    @Transactional(readOnly = true)
+    public List<AnalysisRunView> analysesOf(UUID testRunId) {
+        return analyses.ofTestRun(testRunId);
+    }
+
+    /** The run's raw curve bytes exactly as uploaded (404 before upload). */
+    public byte[] curveBytes(UUID testRunId) {
+        return intake.download(testRunId).bytes();
     }
 }
