@@ -51,8 +51,8 @@ class TraceController {
     @PreAuthorize(Access.ANY_SIGNED_IN)
     @Operation(summary = "Trace several analysis runs at once (?id=…&id=…, 1 to " + MAX_LINES + "), one line each")
     TraceView analyses(@RequestParam(name = "id", required = false) List<UUID> ids) {
-        if (ids == null || ids.isEmpty() || ids.size() > MAX_LINES) {
-            throw new RuleViolation("id", "give between 1 and " + MAX_LINES + " analysis ids as ?id=…, was "
+        if (ids == null || ids.isEmpty() || ids.size() > MAX_LINES || ids.contains(null)) {
+            throw new RuleViolation("id", "give between 1 and " + MAX_LINES + " analysis ids as ?id=…, none empty; was "
                     + (ids == null ? 0 : ids.size()));
         }
         return traces.trace(ids.stream().distinct().map(id -> new TraceLine("analysis " + id, id)).toList(),

@@ -51,6 +51,17 @@ class OrganisationAccessMatrixTest extends IntegrationTest {
         own.put("specimens", bench.specimenId());
         own.put("tests", run.id());
         own.put("analyses", upload.json().get("analysis").get("id").asString());
+        // an issued certificate of the same order (whatever its verdicts: the statement covers a non-conformity)
+        Api m = as(TestAccounts.MANAGER);
+        Api.Response draft = m.post("/api/v1/certificates/drafts", Map.of("orderId", bench.orderId(),
+                "specimenIds", List.of(bench.specimenId()), "productDescription", "Round bar for the access matrix",
+                "includeCurves", false));
+        assertThat(draft.status()).as(draft.toString()).isEqualTo(201);
+        Api.Response issued = m.post("/api/v1/certificates/drafts/" + draft.id() + "/issue", Map.of(
+                "password", TestAccounts.PASSWORD, "nonConformityStatement", "Issued for the access matrix."));
+        assertThat(issued.status()).as(issued.toString()).isEqualTo(201);
+        own.put("certificates", issued.json().get("number").asString());
+        own.put("lines", "1");
     }
 
     private String recordFor(String pattern) {
@@ -119,7 +130,8 @@ class OrganisationAccessMatrixTest extends IntegrationTest {
                 "/api/v1/tests", "/api/v1/results", "/api/v1/results.csv",
                 "/api/v1/tests?specimenId=" + own.get("specimens"),
                 "/api/v1/results?specimenId=" + own.get("specimens"),
-                "/api/v1/results?orderId=" + own.get("orders"))) {
+                "/api/v1/results?orderId=" + own.get("orders"), "/api/v1/certificates",
+                "/api/v1/certificates?number=" + own.get("certificates"))) {
             Api.Response r = other.get(list);
             assertThat(r.status()).as(list + " " + r).isIn(200, 404, 422);
             for (String id : own.values()) {
