@@ -90,7 +90,10 @@ class CertificateLines {
         }
         List<CertificateLine> lines = new ArrayList<>();
         ConformityCheckFactory checks = new ConformityCheckFactory(rule);
-        for (Chosen c : chosen) {
+        List<FieldIssue> empty = new ArrayList<>();
+        for (int ci = 0; ci < chosen.size(); ci++) {
+            Chosen c = chosen.get(ci);
+            int linesBefore = lines.size();
             Map<String, OrderView.RequirementView> required = requirementsFor(order, c.heat());
             Map<String, Object> seenProperties = new LinkedHashMap<>();
             for (OrderView.RequirementView r : order.requirements()) {
@@ -110,6 +113,15 @@ class CertificateLines {
                     }
                 }
             }
+            if (lines.size() == linesBefore) {
+                // a certificate that reports nothing for a specimen would still look like a statement about it
+                empty.add(new FieldIssue("/specimenIds/" + specimenIds.indexOf(c.specimen().id()), "nothing to report for "
+                        + c.specimen().labIdentifier() + ": the order states no requirement and its test run names no "
+                        + "reported properties"));
+            }
+        }
+        if (!empty.isEmpty()) {
+            throw new RuleViolation(empty);
         }
         return List.copyOf(lines);
     }

@@ -33,6 +33,7 @@ class OrganisationAccessMatrixTest extends IntegrationTest {
     private static final List<String> OWN_BUT_NOT_FOR_CUSTOMERS = List.of("GET /api/v1/tests/{id}/curve");
 
     private Map<String, String> own;
+    private String linePosition;
 
     private void ownRecords() {
         if (own != null) {
@@ -41,7 +42,9 @@ class OrganisationAccessMatrixTest extends IntegrationTest {
         Api t = as(TestAccounts.TECHNICIAN);
         String organisation = organisations.get(TestAccounts.CUSTOMER);
         ReliabilityBench bench = ReliabilityBench.make(t, as(TestAccounts.MANAGER), organisation);
-        Api.Response run = t.post("/api/v1/tests", bench.registration());
+        Map<String, Object> registration = new LinkedHashMap<>(bench.registration());
+        registration.put("reportedProperties", List.of("Rm")); // the order states no requirement: report Rm
+        Api.Response run = t.post("/api/v1/tests", registration);
         Api.Response upload = t.putBytes("/api/v1/tests/" + run.id() + "/curve", "text/csv", bench.curve());
         assertThat(upload.status()).as(upload.toString()).isEqualTo(201);
         own = new LinkedHashMap<>();
@@ -61,7 +64,8 @@ class OrganisationAccessMatrixTest extends IntegrationTest {
                 "password", TestAccounts.PASSWORD, "nonConformityStatement", "Issued for the access matrix."));
         assertThat(issued.status()).as(issued.toString()).isEqualTo(201);
         own.put("certificates", issued.json().get("number").asString());
-        own.put("lines", "1");
+        // a certificate line's position: a path value, not a record, so not in the lists' leak check
+        linePosition = "1";
     }
 
     private String recordFor(String pattern) {
@@ -74,7 +78,7 @@ class OrganisationAccessMatrixTest extends IntegrationTest {
             }
             out.append('/');
             if (segment.startsWith("{")) {
-                String id = own.get(previous);
+                String id = previous.equals("lines") ? linePosition : own.get(previous);
                 if (id == null) {
                     return null;
                 }
@@ -108,10 +112,12 @@ class OrganisationAccessMatrixTest extends IntegrationTest {
                 continue;
             }
             checked++;
-            int mine = as(TestAccounts.CUSTOMER).get(path).status();
+            Api.Response answer = as(TestAccounts.CUSTOMER).get(path);
+            int mine = answer.status();
             int expectedMine = OWN_BUT_NOT_FOR_CUSTOMERS.contains(key) ? 403 : 200;
             if (mine != expectedMine) {
-                failures.put(key + " as the owner", "answered " + mine + ", expected " + expectedMine);
+                failures.put(key + " as the owner", "answered " + mine + ", expected " + expectedMine + ": "
+                        + answer.body());
             }
             int other = as(TestAccounts.OTHER_CUSTOMER).get(path).status();
             if (other != 404) {
