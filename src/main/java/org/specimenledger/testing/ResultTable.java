@@ -10,6 +10,11 @@ import java.util.stream.Collectors;
  * A result set as CSV (RFC 4180: comma-separated, CRLF line ends, fields with a comma, quote or line end
  * quoted with inner quotes doubled), one row per test run. The header names each property with its unit,
  * e.g. {@code Rp0.2 [MPa]}; property cells hold the reported (rounded) value, empty when not determined.
+ *
+ * <p>The one cell whose text a user typed, the specimen mark, is neutralised against formula injection: a
+ * spreadsheet opening the file would run a cell starting with {@code = + - @}, tab or carriage return as a
+ * formula, so such a cell gets a leading apostrophe (OWASP's guidance on CSV injection [CP]). The stored
+ * mark is unchanged; every other cell is written by the service (identifiers, dates, numbers, codes).
  */
 final class ResultTable {
 
@@ -31,7 +36,7 @@ final class ResultTable {
         header.add("flags");
         line(out, header);
         for (ResultRow r : rows) {
-            List<String> cells = new ArrayList<>(List.of(r.labIdentifier(), r.testRunId().toString(),
+            List<String> cells = new ArrayList<>(List.of(typedText(r.labIdentifier()), r.testRunId().toString(),
                     r.testDate().toString(), r.standard().name(), r.mode().name(), r.validity().name(),
                     r.analysisId().toString(), r.softwareVersion(), r.methodVersion(), r.inputSha256()));
             for (String symbol : units.keySet()) {
@@ -53,6 +58,15 @@ final class ResultTable {
             out.append(field(cells.get(i)));
         }
         out.append("\r\n");
+    }
+
+    /** A user's text as a cell that no spreadsheet evaluates. */
+    static String typedText(String s) {
+        if (s == null || s.isEmpty()) {
+            return s;
+        }
+        char c = s.charAt(0);
+        return c == '=' || c == '+' || c == '-' || c == '@' || c == '\t' || c == '\r' ? "'" + s : s;
     }
 
     static String field(String s) {
