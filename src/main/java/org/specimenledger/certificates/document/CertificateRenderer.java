@@ -72,6 +72,9 @@ public final class CertificateRenderer {
         // java.io.tmpdir by default: two processes compiling the same templates at once (two instances on one
         // host, parallel builds) then overwrite and delete each other's files. A private folder per renderer avoids it.
         context.setProperty("net.sf.jasperreports.compiler.temp.dir", privateCompileFolder());
+        // the Eclipse compiler reads classes through the class loader, so the templates also compile inside the
+        // packaged jar (java -jar), whose nested jars the default javax.tools compiler cannot see
+        context.setProperty("net.sf.jasperreports.compiler.java", "net.sf.jasperreports.jdt.JRJdtCompiler");
         main = compile("certificate");
         Map<String, JasperReport> subs = new HashMap<>();
         for (String name : SUBREPORTS) {
