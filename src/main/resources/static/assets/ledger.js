@@ -99,7 +99,7 @@
         return verification.valid ? '✓ chain intact: ' + verification.eventsChecked + ' events checked'
           : '✕ chain broken at event ' + verification.firstBrokenSeq + ': ' + verification.problem;
       }
-      return job.failure || '';
+      return job.failure || (job.succeeded + ' items succeeded, ' + job.failed + ' failed');
     }
     function poll() {
       var xhr = new XMLHttpRequest();

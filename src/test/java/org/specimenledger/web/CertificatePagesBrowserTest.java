@@ -13,6 +13,7 @@ import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.openqa.selenium.StaleElementReferenceException;
 import org.openqa.selenium.support.ui.Select;
 import org.specimenledger.certificates.CertificateBench;
 import org.specimenledger.testsupport.Api;
@@ -134,6 +135,70 @@ class CertificatePagesBrowserTest extends IntegrationTest {
         JsonNode issued = as(TestAccounts.MANAGER).get("/api/v1/certificates/" + number).json();
         assertThat(issued.get("orderId").asString()).isEqualTo(order.orderId());
         assertThat(issued.get("issuedBy").asString()).isEqualTo(TestAccounts.MANAGER);
+
+        browser.find("#revise-reason").sendKeys("the product description lacked the delivery condition");
+        browser.find("#revise-form button[type=submit]").click();
+        browser.waiting().until(d -> browser.path().startsWith("/lab/certificates/drafts/"));
+        assertThat(browser.driver.getPageSource()).contains("revision 0 because the product description");
+        browser.find("#password").sendKeys(TestAccounts.PASSWORD);
+        browser.find("#issue-form button[type=submit]").click();
+        browser.waiting().until(d -> browser.path().equals("/lab/certificates/" + number));
+        assertThat(browser.all("#revisions tbody tr")).hasSize(2);
+        assertThat(browser.find("#revisions tbody tr:last-child").getText()).contains("superseded");
+        assertThat(browser.consoleErrors()).isEmpty();
+    }
+
+    @Test
+    void aLineThatDoesNotPassNeedsTheNonConformityStatementAndAWithdrawalNeedsAReason() {
+        // Rm at least 600 MPa: the bench's curves reach about 412 MPa, so the Rm lines fail
+        CertificateBench.Order order = bench.order(organisations.get(TestAccounts.CUSTOMER),
+                List.of(CertificateBench.requirement("Rm", "600", null, "MPa")), 1);
+        browser.signIn(TestAccounts.MANAGER, TestAccounts.PASSWORD);
+        browser.open("/lab/certificates/new?orderId=" + order.orderId());
+        browser.find("#productDescription").sendKeys("Hot-rolled round bar, 20 mm");
+        browser.find("#draft-form button[type=submit]").click();
+        browser.waiting().until(d -> browser.path().startsWith("/lab/certificates/drafts/"));
+        assertThat(browser.find("#not-all-pass").getText()).contains("non-conformity statement");
+        assertThat(browser.find("#line-1 .verdict").getText()).isEqualTo("fail");
+        browser.find("#password").sendKeys(TestAccounts.PASSWORD);
+        browser.find("#issue-form button[type=submit]").click();
+        browser.waiting().until(d -> !browser.all(".problems").isEmpty());
+        assertThat(browser.find(".problems").getText()).contains("/nonConformityStatement");
+        browser.screenshot("certificate-draft-not-conforming");
+        assertThat(browser.consoleErrors()).isEmpty();
+
+        browser.find("#nonConformityStatement").sendKeys("Rm below the ordered minimum; released for the customer's review");
+        browser.find("#password").sendKeys(TestAccounts.PASSWORD);
+        browser.find("#issue-form button[type=submit]").click();
+        browser.waiting().until(d -> browser.path().matches("/lab/certificates/[A-Z]+-\\d{4}-\\d{5}"));
+        String number = browser.find("#number").getText();
+
+        browser.find("#withdraw-form button[type=submit]").click();
+        assertThat(browser.path()).isEqualTo("/lab/certificates/" + number);
+        assertThat(browser.find("#status").getText()).contains("valid");
+        browser.find("#withdraw-reason").sendKeys("issued against the wrong purchase order");
+        browser.find("#withdraw-form button[type=submit]").click();
+        browser.waiting().ignoring(StaleElementReferenceException.class)
+                .until(d -> browser.find("#status").getText().contains("withdrawn"));
+        assertThat(browser.driver.getPageSource()).contains("issued against the wrong purchase order");
+        browser.screenshot("certificate-withdrawn");
+        assertThat(browser.consoleErrors()).isEmpty();
+    }
+
+    @Test
+    void managerStartsAReanalysisOfAnOrderAndFollowsItsProgress() {
+        CertificateBench.Order order = bench.order(organisations.get(TestAccounts.CUSTOMER), passing(), 2);
+        browser.signIn(TestAccounts.MANAGER, TestAccounts.PASSWORD);
+        browser.open("/lab/jobs");
+        new Select(browser.find("#reanalysis-order")).selectByValue(order.orderId());
+        browser.find("#reanalysis-reason").sendKeys("engine update: recompute this order");
+        browser.find("#reanalysis-form button[type=submit]").click();
+        browser.waiting().until(d -> browser.path().matches("/lab/jobs/[0-9a-f-]{36}"));
+        browser.waiting().ignoring(StaleElementReferenceException.class).until(d -> browser.find("#job-progress").getAttribute("data-state").equals("FINISHED"));
+        assertThat(browser.find("#job-bar").getAttribute("value")).isEqualTo("2");
+        assertThat(browser.find("#job-outcome").getText()).isEqualTo("2 items succeeded, 0 failed");
+        browser.screenshot("job-reanalysis");
+        assertThat(browser.consoleErrors()).isEmpty();
     }
 
     @Test
@@ -159,14 +224,14 @@ class CertificatePagesBrowserTest extends IntegrationTest {
         browser.find("#verify-ledger button[type=submit]").click();
         browser.waiting().until(d -> browser.path().matches("/lab/jobs/[0-9a-f-]{36}"));
         String jobPath = browser.path();
-        browser.waiting().until(d -> browser.find("#job-progress").getAttribute("data-state").equals("FINISHED"));
+        browser.waiting().ignoring(StaleElementReferenceException.class).until(d -> browser.find("#job-progress").getAttribute("data-state").equals("FINISHED"));
         assertThat(browser.find("#job-outcome").getText()).startsWith("✓ chain intact");
         assertThat(browser.find("#job-bar").getAttribute("value")).isEqualTo("1");
         browser.screenshot("job-ledger-verification");
         assertThat(browser.consoleErrors()).isEmpty();
         browser.open("/lab/jobs");
         browser.find("#jobs a[href='" + jobPath + "']").click();
-        browser.waiting().until(d -> browser.find("#job-progress").getAttribute("data-state").equals("FINISHED"));
+        browser.waiting().ignoring(StaleElementReferenceException.class).until(d -> browser.find("#job-progress").getAttribute("data-state").equals("FINISHED"));
         browser.screenshot("jobs");
         assertThat(browser.consoleErrors()).isEmpty();
     }
