@@ -96,6 +96,7 @@ class CertificatePagesBrowserTest extends IntegrationTest {
         assertThat(session.get("/portal/certificates/" + theirs + "/pdf").statusCode()).isEqualTo(404);
         String search = session.get("/portal?number=" + theirs).body();
         assertThat(search).doesNotContain("id=\"certificate-" + theirs).contains("No certificate matches");
+        assertThat(session.get("/portal?from=not-a-date").statusCode()).as("a mistyped date").isEqualTo(400);
     }
 
     @Test
