@@ -55,6 +55,11 @@ class TraceController {
             throw new RuleViolation("id", "give between 1 and " + MAX_LINES + " analysis ids as ?id=…, was "
                     + (ids == null ? 0 : ids.size()));
         }
+        if (ids.contains(null)) {
+            // a blank ?id= converts to null: the caller's mistake, not a failure of ours
+            throw new RuleViolation("id", "each ?id= must be an analysis id; position " + (ids.indexOf(null) + 1)
+                    + " is blank");
+        }
         return traces.trace(ids.stream().distinct().map(id -> new TraceLine("analysis " + id, id)).toList(),
                 TraceRoot.NONE);
     }

@@ -61,7 +61,9 @@ class TracePage {
                 .orElseThrow(() -> new RecordNotFound("certificate", number.trim()));
         List<TraceLine> lines = c.lines().stream().map(l -> new TraceLine(label(l), l.analysisRunId())).toList();
         model.addAttribute("c", c);
-        model.addAttribute("trace", traces.trace(lines, new TraceRoot(c.number(), null, c.ledgerSeq())));
+        if (!lines.isEmpty()) {
+            model.addAttribute("trace", traces.trace(lines, new TraceRoot(c.number(), null, c.ledgerSeq())));
+        }
         return "trace";
     }
 
