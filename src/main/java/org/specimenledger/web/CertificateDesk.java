@@ -132,6 +132,39 @@ class CertificateDesk {
         return draftPage(model, draft, problems);
     }
 
+    /**
+     * Saves the open draft again with the same content and a reason: its lines are rebuilt from the current analyses
+     * (the way out of the issue's 409 when an analysis or a run's validity changed since the draft was saved).
+     */
+    @PostMapping("/lab/certificates/drafts/{id}/rebuild")
+    @PreAuthorize(Access.MANAGER)
+    String rebuild(@PathVariable UUID id, @RequestParam(required = false) String reason, RedirectAttributes redirect) {
+        DraftView d = reads.draft(id);
+        try {
+            service.changeDraft(id, new CertificateRequests.DraftRequest(d.orderId(), d.specimenIds(), d.decisionRule(),
+                    d.productDescription(), d.deviations(), d.nonConformityStatement(), d.includeCurves(), reason));
+        } catch (RuleViolation e) {
+            redirect.addFlashAttribute("problems", e.issues());
+        } catch (StateConflict e) {
+            redirect.addFlashAttribute("problems", List.of(new FieldIssue("", e.getMessage())));
+        }
+        return "redirect:/lab/certificates/drafts/" + id;
+    }
+
+    @PostMapping("/lab/certificates/drafts/{id}/discard")
+    @PreAuthorize(Access.MANAGER)
+    String discard(@PathVariable UUID id, @RequestParam(required = false) String reason, RedirectAttributes redirect) {
+        try {
+            service.discardDraft(id, reason);
+            return "redirect:/lab/certificates";
+        } catch (RuleViolation e) {
+            redirect.addFlashAttribute("problems", e.issues());
+        } catch (StateConflict e) {
+            redirect.addFlashAttribute("problems", List.of(new FieldIssue("", e.getMessage())));
+        }
+        return "redirect:/lab/certificates/drafts/" + id;
+    }
+
     @GetMapping("/lab/certificates/{number}")
     @PreAuthorize(Access.MANAGER)
     String certificate(@PathVariable String number, Model model) {
@@ -195,7 +228,9 @@ class CertificateDesk {
         model.addAttribute("draft", draft);
         model.addAttribute("order", customers.order(draft.orderId()).orElse(null));
         model.addAttribute("signatureMeaning", CertificateDocument.SIGNATURE_MEANING);
-        model.addAttribute("problems", problems);
+        if (!problems.isEmpty() || !model.containsAttribute("problems")) {
+            model.addAttribute("problems", problems);
+        }
         if (!model.containsAttribute("nonConformityStatement")) {
             model.addAttribute("nonConformityStatement", draft.nonConformityStatement());
         }

@@ -167,6 +167,12 @@ class CertificatePagesBrowserTest extends IntegrationTest {
         assertThat(browser.find(".problems").getText()).contains("/nonConformityStatement");
         browser.screenshot("certificate-draft-not-conforming");
         assertThat(browser.consoleErrors()).isEmpty();
+        // the refused issue answered at the form's address; the draft's own page is the one without "/issue"
+        String draftPath = browser.path().replaceFirst("/issue$", "");
+        browser.find("#rebuild-reason").sendKeys("re-read the current analyses before signing");
+        browser.find("#rebuild-form button[type=submit]").click();
+        browser.waiting().until(d -> browser.path().equals(draftPath) && !browser.all("#line-1").isEmpty());
+        assertThat(browser.find("#line-1 .verdict").getText()).isEqualTo("fail");
 
         browser.find("#nonConformityStatement").sendKeys("Rm below the ordered minimum; released for the customer's review");
         browser.find("#password").sendKeys(TestAccounts.PASSWORD);
@@ -184,6 +190,16 @@ class CertificatePagesBrowserTest extends IntegrationTest {
         assertThat(browser.driver.getPageSource()).contains("issued against the wrong purchase order");
         browser.screenshot("certificate-withdrawn");
         assertThat(browser.consoleErrors()).isEmpty();
+
+        browser.open("/lab/certificates/new?orderId=" + order.orderId());
+        browser.find("#productDescription").sendKeys("Hot-rolled round bar, 20 mm");
+        browser.find("#draft-form button[type=submit]").click();
+        browser.waiting().until(d -> browser.path().startsWith("/lab/certificates/drafts/"));
+        String discarded = browser.path();
+        browser.find("#discard-reason").sendKeys("opened by mistake");
+        browser.find("#discard-form button[type=submit]").click();
+        browser.waiting().until(d -> browser.path().equals("/lab/certificates"));
+        assertThat(browser.all("#drafts a[href='" + discarded + "']")).isEmpty();
     }
 
     @Test
