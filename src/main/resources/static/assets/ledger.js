@@ -87,7 +87,51 @@
     });
   }
 
+  // A job page: polls its progress until the job ends. The job runs on the server whether or not the page is open.
+  function jobProgress(section) {
+    var bar = document.getElementById('job-bar');
+    var state = document.getElementById('job-state');
+    var outcome = document.getElementById('job-outcome');
+    var url = section.getAttribute('data-progress-url');
+    function describe(job) {
+      var verification = job.summary && job.summary.verification;
+      if (verification) {
+        return verification.valid ? '✓ chain intact: ' + verification.eventsChecked + ' events checked'
+          : '✕ chain broken at event ' + verification.firstBrokenSeq + ': ' + verification.problem;
+      }
+      return job.failure || (job.succeeded + ' items succeeded, ' + job.failed + ' failed');
+    }
+    function poll() {
+      var xhr = new XMLHttpRequest();
+      xhr.open('GET', url);
+      xhr.setRequestHeader('Accept', 'application/json, application/problem+json');
+      xhr.addEventListener('load', function () {
+        var job = null;
+        try { job = JSON.parse(xhr.responseText); } catch (e) { job = null; }
+        if (xhr.status !== 200 || !job) {
+          state.textContent = 'Progress not available (status ' + xhr.status + '); reload the page to try again.';
+          return;
+        }
+        bar.max = job.total > 0 ? job.total : 1;
+        bar.value = job.done;
+        state.textContent = job.state.toLowerCase() + ': ' + job.done + ' of ' + job.total + ' done, '
+          + job.failed + ' failed';
+        section.setAttribute('data-state', job.state);
+        if (job.state === 'FINISHED' || job.state === 'FAILED') {
+          outcome.textContent = describe(job);
+        } else {
+          window.setTimeout(poll, 700);
+        }
+      });
+      xhr.addEventListener('error', function () { window.setTimeout(poll, 3000); });
+      xhr.send();
+    }
+    poll();
+  }
+
   document.addEventListener('DOMContentLoaded', function () {
+    var job = document.getElementById('job-progress');
+    if (job) { jobProgress(job); }
     var specimen = document.getElementById('specimen-form');
     if (specimen) {
       showMatching(specimen, 'shape', 'data-shapes');

@@ -162,7 +162,7 @@ public class Jobs {
     }
 
     /** Newest first, then by id (a stable order for paging). */
-    JobPage list(int page, int size) {
+    public JobPage list(int page, int size) {
         PageRequest request = PageRequest.of(page, size, Sort.by(Sort.Order.desc("submittedAt"), Sort.Order.asc("id")));
         return transaction.execute(t -> {
             Page<Job> found = seesAll() ? repository.findAll(request)

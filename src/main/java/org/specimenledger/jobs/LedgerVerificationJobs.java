@@ -18,7 +18,7 @@ import org.springframework.web.bind.annotation.RestController;
  * not in {@code audit}, because the jobs feature already depends on the ledger.
  */
 @RestController
-class LedgerVerificationJobs {
+public class LedgerVerificationJobs {
 
     static final String KIND = "ledger-verification";
 
@@ -35,7 +35,13 @@ class LedgerVerificationJobs {
     @Operation(summary = "Verify the whole ledger chain as a job; 202 with the job, whose summary.verification is "
             + "the answer of GET /api/v1/audit/verify")
     ResponseEntity<JobView> submit() {
-        JobView job = jobs.submit(KIND, "verification of the ledger chain", 1, null, progress -> {
+        JobView job = start();
+        return ResponseEntity.accepted().location(URI.create("/api/v1/jobs/" + job.id())).body(job);
+    }
+
+    /** Submits the verification of the whole chain as a job (also started from the pages). */
+    public JobView start() {
+        return jobs.submit(KIND, "verification of the ledger chain", 1, null, progress -> {
             ChainVerification v = verifier.verify();
             Map<String, Object> item = new LinkedHashMap<>();
             item.put("eventsChecked", v.eventsChecked());
@@ -51,6 +57,5 @@ class LedgerVerificationJobs {
             answer.put("verification", v);
             return answer;
         });
-        return ResponseEntity.accepted().location(URI.create("/api/v1/jobs/" + job.id())).body(job);
     }
 }

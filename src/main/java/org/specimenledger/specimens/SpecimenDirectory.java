@@ -40,4 +40,10 @@ public class SpecimenDirectory {
         return specimens.findAll(PageRequest.of(0, limit, Sort.by(Sort.Direction.DESC, "createdAt"))).stream()
                 .map(SpecimenView::of).toList();
     }
+
+    /** The specimens of one order in mark order (laboratory pages; no customer scope). */
+    @Transactional(readOnly = true)
+    public List<SpecimenView> ofOrder(UUID orderId) {
+        return specimens.findAllByOrderIdOrderByLabIdentifierAsc(orderId).stream().map(SpecimenView::of).toList();
+    }
 }

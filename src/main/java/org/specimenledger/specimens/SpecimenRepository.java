@@ -15,6 +15,8 @@ interface SpecimenRepository extends JpaRepository<Specimen, UUID>, JpaSpecifica
 
     boolean existsByLabIdentifierIgnoreCaseAndIdNot(String labIdentifier, UUID id);
 
+    List<Specimen> findAllByOrderIdOrderByLabIdentifierAsc(UUID orderId);
+
     boolean existsByHeatIdAndCustomerId(UUID heatId, UUID customerId);
 
     @Query("select distinct s.heatId from Specimen s where s.customerId = :customerId")

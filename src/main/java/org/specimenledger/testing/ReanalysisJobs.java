@@ -25,7 +25,7 @@ import org.springframework.stereotype.Service;
  * job goes on.
  */
 @Service
-class ReanalysisJobs {
+public class ReanalysisJobs {
 
     static final String KIND = "reanalysis";
     /** More runs than this in one job are refused: split the filter. */
@@ -40,7 +40,7 @@ class ReanalysisJobs {
      *     running engine's
      * @param parameters the parameter set for every new analysis (missing keys: each run's defaults)
      */
-    record ReanalysisRequest(@Size(max = MAX_RUNS) List<UUID> testRunIds, UUID orderId, UUID heatId,
+    public record ReanalysisRequest(@Size(max = MAX_RUNS) List<UUID> testRunIds, UUID orderId, UUID heatId,
             LocalDate testedFrom, LocalDate testedTo, Boolean includeInvalid, Boolean onlyOlderMethod,
             @Size(max = 100) Map<String, Object> parameters, @NotNull @NotBlank @Size(max = 2000) String reason) {
     }
@@ -55,7 +55,8 @@ class ReanalysisJobs {
         this.jobs = jobs;
     }
 
-    JobView submit(ReanalysisRequest r) {
+    /** Selects the runs and submits the job; 422 when none or too many match. */
+    public JobView submit(ReanalysisRequest r) {
         List<UUID> runs = select(r);
         if (runs.isEmpty()) {
             throw new RuleViolation("/", "no test run with a stored curve matches the filter");

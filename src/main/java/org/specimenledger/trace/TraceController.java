@@ -51,9 +51,14 @@ class TraceController {
     @PreAuthorize(Access.ANY_SIGNED_IN)
     @Operation(summary = "Trace several analysis runs at once (?id=…&id=…, 1 to " + MAX_LINES + "), one line each")
     TraceView analyses(@RequestParam(name = "id", required = false) List<UUID> ids) {
-        if (ids == null || ids.isEmpty() || ids.size() > MAX_LINES || ids.contains(null)) {
-            throw new RuleViolation("id", "give between 1 and " + MAX_LINES + " analysis ids as ?id=…, none empty; was "
+        if (ids == null || ids.isEmpty() || ids.size() > MAX_LINES) {
+            throw new RuleViolation("id", "give between 1 and " + MAX_LINES + " analysis ids as ?id=…, was "
                     + (ids == null ? 0 : ids.size()));
+        }
+        if (ids.contains(null)) {
+            // a blank ?id= converts to null: the caller's mistake, not a failure of ours
+            throw new RuleViolation("id", "each ?id= must be an analysis id; position " + (ids.indexOf(null) + 1)
+                    + " is blank");
         }
         return traces.trace(ids.stream().distinct().map(id -> new TraceLine("analysis " + id, id)).toList(),
                 TraceRoot.NONE);

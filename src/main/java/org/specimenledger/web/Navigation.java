@@ -26,19 +26,19 @@ record Navigation(List<Entry> entries) {
                 e.add(new Entry("Register a specimen", "/lab/specimens/new", null));
                 e.add(new Entry("Equipment", "/lab/equipment", null));
                 if (role == Role.LAB_MANAGER) {
-                    e.add(new Entry("Certificates", null, "certificate drafting and issue"));
+                    e.add(new Entry("Certificates", "/lab/certificates", null));
                 }
-                e.add(new Entry("Long-running work", null, "background jobs with progress"));
+                e.add(new Entry("Long-running work", "/lab/jobs", null));
             }
             case AUDITOR -> {
                 e.add(new Entry("Audit desk", "/audit-desk", null));
                 e.add(new Entry("Equipment", "/lab/equipment", null));
-                e.add(new Entry("Trace a certificate", null, "the trace tree of a certificate"));
-                e.add(new Entry("Ledger verification", null, "background jobs with progress"));
+                e.add(new Entry("Trace a certificate", "/audit-desk/trace", null));
+                e.add(new Entry("Ledger verification", "/lab/jobs", null));
             }
             case CUSTOMER -> {
-                e.add(new Entry("Portal", "/portal", null));
-                e.add(new Entry("Our certificates", null, "certificate issue and download"));
+                e.add(new Entry("Our certificates", "/portal", null));
+                
                 e.add(new Entry("Download tokens", null, "customer API tokens"));
             }
         }

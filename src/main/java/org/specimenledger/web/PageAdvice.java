@@ -17,7 +17,8 @@ import org.springframework.web.bind.annotation.ModelAttribute;
  * shows as a page rather than as a problem document: a record that does not exist (404) and a page the
  * role may not open (403). Only for the HTML page controllers; the script endpoints answer with problems.
  */
-@ControllerAdvice(assignableTypes = {StartPages.class, SpecimenPages.class, TestRunPages.class, EquipmentPage.class})
+@ControllerAdvice(assignableTypes = {StartPages.class, SpecimenPages.class, TestRunPages.class, EquipmentPage.class,
+    CertificatePortal.class, CertificateDesk.class, TracePage.class, JobPages.class})
 @Order(Ordered.HIGHEST_PRECEDENCE)
 class PageAdvice {
 

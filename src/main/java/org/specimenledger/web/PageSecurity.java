@@ -30,7 +30,8 @@ import org.springframework.web.filter.OncePerRequestFilter;
 class PageSecurity {
 
     /** The paths the pages own; everything else belongs to the API chain. */
-    static final String[] PAGE_PATHS = {"/", "/sign-in", "/sign-out", "/lab", "/lab/**", "/audit-desk", "/portal",
+    static final String[] PAGE_PATHS = {"/", "/sign-in", "/sign-out", "/lab", "/lab/**", "/audit-desk", "/audit-desk/**",
+        "/portal", "/portal/**",
         "/assets/**", "/favicon.ico"};
 
     @Bean

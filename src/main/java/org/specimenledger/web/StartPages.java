@@ -30,10 +30,4 @@ class StartPages {
     String auditDesk() {
         return "audit-desk";
     }
-
-    @GetMapping("/portal")
-    @PreAuthorize("hasRole('CUSTOMER')")
-    String portal() {
-        return "portal";
-    }
 }

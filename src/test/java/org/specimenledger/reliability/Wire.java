@@ -57,7 +57,19 @@ final class Wire {
         }
         b.method(method, body == null ? HttpRequest.BodyPublishers.noBody() : HttpRequest.BodyPublishers.ofByteArray(body));
         try {
-            HttpResponse<String> r = HTTP.send(b.build(), HttpResponse.BodyHandlers.ofString(StandardCharsets.UTF_8));
+            HttpResponse<String> r;
+            try {
+                r = HTTP.send(b.build(), HttpResponse.BodyHandlers.ofString(StandardCharsets.UTF_8));
+            } catch (IOException e) {
+                // The server closes a connection after refusing an oversized request line; a POST or PUT sent on that
+                // pooled connection before the close was seen gets no bytes at all (the client retries only GETs by
+                // itself). Such a request never reached the service, so sending it once more on a new connection is
+                // the same request, not a second one.
+                if (e.getMessage() == null || !e.getMessage().contains("received no bytes")) {
+                    throw e;
+                }
+                r = HTTP.send(b.build(), HttpResponse.BodyHandlers.ofString(StandardCharsets.UTF_8));
+            }
             return new Answer(r.statusCode(), r.headers(), r.body());
         } catch (IOException e) {
             throw new IllegalStateException(method + " " + pathAndQuery + " failed: " + e, e);
