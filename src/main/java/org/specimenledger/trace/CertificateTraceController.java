@@ -93,9 +93,10 @@ class CertificateTraceController {
     }
 
     private CertificateTrace view(CertificateView c, List<TraceLine> lines) {
-        TraceView trace = traces.trace(lines, new TraceRoot(c.number(), null, pdfEventSeq(c)));
+        long pdfEventSeq = pdfEventSeq(c);
+        TraceView trace = traces.trace(lines, new TraceRoot(c.number(), null, pdfEventSeq));
         return new CertificateTrace(c.number(), c.revision(), c.status(), c.pdfSha256(), c.ledgerSeq(), c.ledgerHash(),
-                c.checkpointId(), c.checkpointRoot(), pdfEventSeq(c), trace);
+                c.checkpointId(), c.checkpointRoot(), pdfEventSeq, trace);
     }
 
     /** A customer asking for another organisation's certificate gets the same 404 as for one that does not exist. */

@@ -2,19 +2,17 @@ package org.specimenledger.certificates;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.util.HexFormat;
 import java.util.concurrent.TimeUnit;
-import java.util.zip.ZipEntry;
-import java.util.zip.ZipInputStream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.specimenledger.testsupport.Api;
 import org.specimenledger.testsupport.TestAccounts;
+import org.specimenledger.testsupport.Zips;
 import tools.jackson.databind.JsonNode;
 
 /**
@@ -54,7 +52,7 @@ class CertificateTraceApiTest extends CertificateTesting {
 
         Api.Download zip = as(TestAccounts.AUDITOR).getBytes("/api/v1/trace/certificates/" + number + "/bundle");
         assertThat(zip.status()).isEqualTo(200);
-        unzip(zip.body(), dir);
+        Zips.unzip(zip.body(), dir);
         byte[] pdf = Files.readAllBytes(dir.resolve("document.pdf"));
         assertThat(HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(pdf)))
                 .isEqualTo(c.get("pdfSha256").asString());
@@ -72,16 +70,5 @@ class CertificateTraceApiTest extends CertificateTesting {
         String out2 = new String(again.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         assertThat(again.waitFor(120, TimeUnit.SECONDS)).isTrue();
         assertThat(again.exitValue()).as(out2).isNotZero();
-    }
-
-    private static void unzip(byte[] zip, Path to) throws Exception {
-        try (ZipInputStream in = new ZipInputStream(new ByteArrayInputStream(zip), StandardCharsets.UTF_8)) {
-            for (ZipEntry e; (e = in.getNextEntry()) != null; ) {
-                Path target = to.resolve(e.getName()).normalize();
-                assertThat(target.startsWith(to)).isTrue();
-                Files.createDirectories(target.getParent());
-                Files.write(target, in.readAllBytes());
-            }
-        }
     }
 }

@@ -2,7 +2,6 @@ package org.specimenledger.testing;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -10,12 +9,11 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
-import java.util.zip.ZipEntry;
-import java.util.zip.ZipInputStream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.specimenledger.testsupport.Api;
 import org.specimenledger.testsupport.TestAccounts;
+import org.specimenledger.testsupport.Zips;
 
 /**
  * The audit bundle checked the way an outsider checks it: unpacked, then {@code bash VERIFY.txt} run
@@ -44,7 +42,7 @@ class AuditBundleTest extends TestRunTesting {
         Api.Download zip = as(TestAccounts.AUDITOR).getBytes("/api/v1/trace/tests/" + run + "/bundle");
         assertThat(zip.status()).isEqualTo(200);
         assertThat(zip.header("Content-Type")).isEqualTo("application/zip");
-        unzip(zip.body(), dir);
+        Zips.unzip(zip.body(), dir);
 
         assertThat(dir.resolve("VERIFY.txt")).exists();
         assertThat(dir.resolve("public-key.pem")).exists();
@@ -124,14 +122,4 @@ class AuditBundleTest extends TestRunTesting {
         }
     }
 
-    private static void unzip(byte[] zip, Path to) throws IOException {
-        try (ZipInputStream in = new ZipInputStream(new ByteArrayInputStream(zip), StandardCharsets.UTF_8)) {
-            for (ZipEntry e; (e = in.getNextEntry()) != null; ) {
-                Path target = to.resolve(e.getName()).normalize();
-                assertThat(target.startsWith(to)).isTrue();
-                Files.createDirectories(target.getParent());
-                Files.write(target, in.readAllBytes());
-            }
-        }
-    }
 }
