@@ -26,6 +26,7 @@ import org.specimenledger.testing.AnalysisRunView;
 import org.specimenledger.testing.ResultFlag;
 import org.specimenledger.testing.TestMode;
 import org.specimenledger.testing.TestRunDirectory;
+import org.specimenledger.testing.TestRunView;
 import org.springframework.stereotype.Component;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -49,8 +50,22 @@ class CertificateLines {
         this.testRuns = testRuns;
     }
 
+    /** The lines, and the records they were built from (by id), which the printed document shows as well. */
+    record Built(List<CertificateLine> lines, Map<UUID, SpecimenView> specimens, Map<UUID, HeatView> heats,
+            Map<UUID, TestRunView> runs, Map<UUID, AnalysisRunView> analyses) {
+    }
+
     @Transactional(readOnly = true)
     List<CertificateLine> build(OrderView order, List<UUID> specimenIds, DecisionRuleChoice rule) {
+        return buildWithRecords(order, specimenIds, rule).lines();
+    }
+
+    /**
+     * As {@link #build}, keeping what was read: issuing renders the document in the same transaction from the
+     * very records its lines were decided on, instead of reading them all a second time.
+     */
+    @Transactional(readOnly = true)
+    Built buildWithRecords(OrderView order, List<UUID> specimenIds, DecisionRuleChoice rule) {
         List<FieldIssue> issues = new ArrayList<>();
         List<Chosen> chosen = new ArrayList<>();
         Set<UUID> seen = new HashSet<>();
@@ -123,7 +138,18 @@ class CertificateLines {
         if (!empty.isEmpty()) {
             throw new RuleViolation(empty);
         }
-        return List.copyOf(lines);
+        Map<UUID, SpecimenView> specimenViews = new LinkedHashMap<>();
+        Map<UUID, HeatView> heatViews = new LinkedHashMap<>();
+        Map<UUID, TestRunView> runViews = new LinkedHashMap<>();
+        Map<UUID, AnalysisRunView> analysisViews = new LinkedHashMap<>();
+        for (Chosen c : chosen) {
+            specimenViews.put(c.specimen().id(), c.specimen());
+            heatViews.put(c.heat().id(), c.heat());
+            runViews.put(c.result().run().id(), c.result().run());
+            analysisViews.put(c.result().analysis().id(), c.result().analysis());
+        }
+        return new Built(List.copyOf(lines), Map.copyOf(specimenViews), Map.copyOf(heatViews), Map.copyOf(runViews),
+                Map.copyOf(analysisViews));
     }
 
     /** The first requirement per property whose thickness range holds the heat's nominal thickness. */

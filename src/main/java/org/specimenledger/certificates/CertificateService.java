@@ -167,7 +167,8 @@ public class CertificateService {
         }
         CertificateStore.Draft draft = openDraft(draftId);
         OrderView order = customers.order(draft.orderId()).orElseThrow();
-        List<CertificateLine> lines = lineBuilder.build(order, draft.specimenIds(), draft.decisionRule());
+        CertificateLines.Built built = lineBuilder.buildWithRecords(order, draft.specimenIds(), draft.decisionRule());
+        List<CertificateLine> lines = built.lines();
         requireUnchanged(draft.lines(), lines);
         boolean allPass = lines.stream().allMatch(CertificateLine::passes);
         String statement = blankToNull(request.nonConformityStatement()) != null
@@ -248,7 +249,7 @@ public class CertificateService {
                 allPass ? null : statement, allPass, now, issueDate, signatory.username(), signatory.displayName(),
                 function, CertificateDocument.SIGNATURE_MEANING, code, event.seq(), event.hash(), checkpoint.id(),
                 checkpoint.rootHash(), "0".repeat(64), 1);
-        byte[] pdf = render(unsigned, lines, order, draft.includeCurves(), replaced, checkpoint);
+        byte[] pdf = render(unsigned, built, order, draft.includeCurves(), replaced, checkpoint);
         String sha256 = sha256(pdf);
         CertificateStore.Issued row = new CertificateStore.Issued(id, number, revision, year, serial, draft.id(),
                 draft.orderId(), draft.customerId(), unsigned.replacesId(), unsigned.revisionReason(), rule,
@@ -342,25 +343,21 @@ public class CertificateService {
         }
     }
 
-    private byte[] render(CertificateStore.Issued c, List<CertificateLine> lines, OrderView order, boolean curves,
+    /** Renders from the records the lines were built from (same transaction), plus each specimen's stored curve. */
+    private byte[] render(CertificateStore.Issued c, CertificateLines.Built built, OrderView order, boolean curves,
             CertificateStore.Issued replaced, CheckpointView checkpoint) {
-        Map<UUID, SpecimenView> specimenViews = new HashMap<>();
-        Map<UUID, org.specimenledger.heats.HeatView> heatViews = new HashMap<>();
-        Map<UUID, org.specimenledger.testing.TestRunView> runViews = new HashMap<>();
-        Map<UUID, AnalysisRunView> analysisViews = new HashMap<>();
+        List<CertificateLine> lines = built.lines();
         Map<UUID, RawCurve> curveData = new HashMap<>();
-        for (CertificateLine l : lines) {
-            specimenViews.computeIfAbsent(l.specimenId(), id -> specimens.find(id).orElseThrow());
-            heatViews.computeIfAbsent(l.heatId(), id -> heats.find(id).orElseThrow());
-            runViews.computeIfAbsent(l.testRunId(), id -> testRuns.find(id).orElseThrow());
-            analysisViews.computeIfAbsent(l.analysisRunId(), id -> testRuns.analysis(id).orElseThrow());
-            if (curves && !curveData.containsKey(l.specimenId())) {
-                testRuns.curveOf(l.testRunId()).ifPresent(curve -> curveData.put(l.specimenId(), curve));
+        if (curves) {
+            for (CertificateLine l : lines) {
+                if (!curveData.containsKey(l.specimenId())) {
+                    testRuns.curveOf(l.testRunId()).ifPresent(curve -> curveData.put(l.specimenId(), curve));
+                }
             }
         }
         CertificateDocuments.Sources sources = new CertificateDocuments.Sources(settings,
-                customers.customer(order.customerId()).orElseThrow(), order, specimenViews, heatViews, runViews,
-                analysisViews, curveData,
+                customers.customer(order.customerId()).orElseThrow(), order, built.specimens(), built.heats(),
+                built.runs(), built.analyses(), curveData,
                 Optional.ofNullable(replaced).map(r -> new CertificateDocument.Replacement(r.number(), r.revision(),
                         c.revisionReason())),
                 Optional.of("checkpoint " + checkpoint.id() + ": tree size " + checkpoint.treeSize() + ", root "

@@ -76,8 +76,8 @@ class AnalysisReplay {
     }
 
     /**
-     * The replay of a row whose stored bytes were just read and hashed, remembered by everything it depends
-     * on: the analysis id, the SHA-256 of the bytes as read now, and the SHA-256 of every stored input of the
+     * The replay of a row, remembered by everything it depends on: the analysis id, the SHA-256 of the stored
+     * bytes as the database hashes them now, and the SHA-256 of every stored input of the
      * computation as read now (reader output, results, flags, parameters, method version, mode, geometry and
      * calibration snapshots, run conditions). The running software is fixed for the life of the process and
      * the computation is deterministic, so a remembered answer is the answer a recomputation would give; a
@@ -87,18 +87,24 @@ class AnalysisReplay {
     ReplayView remembered(AnalysisArchive.Row row) {
         TestRun run = runs.findById(row.testRunId())
                 .orElseThrow(() -> new RecordNotFound(TestRunService.ENTITY, row.testRunId()));
-        byte[] bytes = store.get(row.rawCurveId());
-        String bytesSha256 = sha256(bytes);
+        // The database hashes the bytes it holds now; they are fetched only when no answer is remembered for them.
+        String bytesSha256 = store.sha256OfStored(row.rawCurveId());
         String inputs = sha256(String.join("\u0000", row.input(), row.results(), row.flags(), row.parameters(),
                 row.methodVersion(), row.mode().name(), String.valueOf(row.geometryUsed()),
                 String.valueOf(row.calibrationList()), String.valueOf(RunConditions.of(run)))
                 .getBytes(java.nio.charset.StandardCharsets.UTF_8));
         ReplayView known = outcomes.get(new OutcomeKey(row.id(), bytesSha256, inputs),
-                k -> compute(row, run, bytes, bytesSha256.equals(row.inputSha256())));
+                k -> computeFromStore(row, run));
         return new ReplayView(known.analysisId(), known.testRunId(), known.identical(), known.inputSha256(),
                 known.inputFingerprintMatches(), known.stored(), known.replayed(), known.comparedValues(),
                 known.differenceCount(), known.differences(), known.failure(),
                 clock.instant().truncatedTo(ChronoUnit.MICROS), TestRunService.actor());
+    }
+
+    /** A fresh read and hash of the stored bytes, so the computed answer rests on what it computed from. */
+    private ReplayView computeFromStore(AnalysisArchive.Row row, TestRun run) {
+        byte[] bytes = store.get(row.rawCurveId());
+        return compute(row, run, bytes, sha256(bytes).equals(row.inputSha256()));
     }
 
     private record OutcomeKey(UUID analysisId, String bytesSha256, String inputsSha256) {

@@ -40,4 +40,12 @@ interface CurveContentStore {
      * @throws IllegalStateException when the described curve has no content (a broken store)
      */
     byte[] get(UUID rawCurveId);
+
+    /**
+     * The SHA-256 (lower-case hex) of the bytes as stored now, computed by the store over its own copy, not taken
+     * from the description: a read that only needs to know whether the bytes changed need not carry them over.
+     *
+     * @throws IllegalStateException when the described curve has no content (a broken store)
+     */
+    String sha256OfStored(UUID rawCurveId);
 }

@@ -102,6 +102,17 @@ class DatabaseCurveContentStore implements CurveContentStore {
                 .orElseThrow(() -> new IllegalStateException("raw curve " + rawCurveId + " has no stored content"));
     }
 
+    /** PostgreSQL hashes the stored value itself ({@code sha256(bytea)}, built in since version 11). */
+    @Override
+    @Transactional(readOnly = true)
+    public String sha256OfStored(UUID rawCurveId) {
+        return jdbc.sql("SELECT encode(sha256(content), 'hex') FROM raw_curve_content WHERE raw_curve_id = ?")
+                .param(rawCurveId)
+                .query((rs, n) -> rs.getString(1))
+                .optional()
+                .orElseThrow(() -> new IllegalStateException("raw curve " + rawCurveId + " has no stored content"));
+    }
+
     @PreDestroy
     void stop() {
         writers.shutdown();

@@ -54,12 +54,14 @@ public class CertificateIssueBenchmark {
 
     @Setup(Level.Trial)
     public void start() {
-        context = new SpringApplicationBuilder(SpecimenLedgerApplication.class).properties(Map.of(
-                "ledger.db.url", TestDatabase.url(), "ledger.db.user", "", "ledger.db.password", "",
-                "ledger.demo", "off", "ledger.password-hash-strength", "4", "server.port", "0",
-                "ledger.signing.private-key-file", "target/bench-keys/private.pem",
-                "ledger.signing.public-key-file", "target/bench-keys/public.pem",
-                "logging.level.root", "WARN")).run();
+        // Command-line arguments, not builder properties: those are defaults, which application.yml's
+        // ${LEDGER_DB_URL:} would override, sending the benchmark to the embedded database under ./var.
+        context = new SpringApplicationBuilder(SpecimenLedgerApplication.class).run(
+                "--ledger.db.url=" + TestDatabase.url(), "--ledger.db.user=", "--ledger.db.password=",
+                "--ledger.demo=off", "--ledger.password-hash-strength=4", "--server.port=0",
+                "--ledger.signing.private-key-file=target/bench-keys/private.pem",
+                "--ledger.signing.public-key-file=target/bench-keys/public.pem",
+                "--logging.level.root=WARN");
         int port = ((WebServerApplicationContext) context).getWebServer().getPort();
         Map<String, String> organisations = TestAccounts.ensure(context.getBean(AccountService.class), port);
         Api manager = new Api.Signed(port, TestAccounts.MANAGER, TestAccounts.PASSWORD).api();

@@ -139,6 +139,50 @@ class TraceApiTest extends TestRunTesting {
         assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
     }
 
+    /**
+     * The remembered replay is keyed by the hash the database computes over the stored curve bytes now, not by
+     * the hash recorded at upload: one byte changed behind the application's back must show as not reproduced,
+     * with the input fingerprint not matching, even though the same trace was answered (and remembered) before.
+     */
+    @Test
+    void aTamperedStoredCurveIsNotReproducedEvenAfterAnEarlierTrace() {
+        TestRunFixtures.Bench b = bench();
+        String run = register(b);
+        String analysis = uploaded(run, TestRunFixtures.curve(b)).get("analysis").get("id").asString();
+        String path = "/api/v1/trace/analyses/" + analysis;
+        assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
+        String curveId = jdbc.sql("SELECT raw_curve_id::text FROM analysis_run WHERE id = ?::uuid").param(analysis)
+                .query(String.class).single();
+        byte[] original = jdbc.sql("SELECT content FROM raw_curve_content WHERE raw_curve_id = ?::uuid")
+                .param(curveId).query(byte[].class).single();
+        byte[] changed = original.clone();
+        int last = changed.length - 1;
+        while (last > 0 && !Character.isDigit(changed[last])) {
+            last--;
+        }
+        changed[last] = (byte) (changed[last] == '9' ? '8' : changed[last] + 1); // one digit of the last sample
+        // a tamperer with superuser rights also lifts the check that the bytes match their recorded hash
+        String check = jdbc.sql("""
+                SELECT conname FROM pg_constraint WHERE conrelid = 'raw_curve_content'::regclass
+                   AND pg_get_constraintdef(oid) LIKE '%sha256(content)%'""").query(String.class).single();
+        jdbc.sql("ALTER TABLE raw_curve_content DISABLE TRIGGER raw_curve_content_append_only").update();
+        jdbc.sql("ALTER TABLE raw_curve_content DROP CONSTRAINT " + check).update();
+        try {
+            jdbc.sql("UPDATE raw_curve_content SET content = ? WHERE raw_curve_id = ?::uuid").params(changed, curveId)
+                    .update();
+            JsonNode replay = manager().get(path).json().get("lines").get(0).get("replay");
+            assertThat(replay.get("identical").asBoolean()).as(replay.toString()).isFalse();
+            assertThat(replay.get("inputFingerprintMatches").asBoolean()).as(replay.toString()).isFalse();
+        } finally {
+            jdbc.sql("UPDATE raw_curve_content SET content = ? WHERE raw_curve_id = ?::uuid").params(original, curveId)
+                    .update();
+            jdbc.sql("ALTER TABLE raw_curve_content ADD CONSTRAINT " + check
+                    + " CHECK (encode(sha256(content), 'hex') = sha256)").update();
+            jdbc.sql("ALTER TABLE raw_curve_content ENABLE TRIGGER raw_curve_content_append_only").update();
+        }
+        assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
+    }
+
     @Test
     void customersTraceOnlyTheirOwnOrganisationsRecords() {
         TestRunFixtures.Bench own = bench();
