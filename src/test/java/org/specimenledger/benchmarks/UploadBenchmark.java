@@ -121,10 +121,16 @@ public final class UploadBenchmark {
     }
 
     Map<String, String> bench() throws Exception {
+        return bench(List.of());
+    }
+
+    /** The bench with an order that states these requirements (each: property, min, max, unit). */
+    Map<String, String> bench(List<Map<String, Object>> requirements) throws Exception {
         String suffix = UUID.randomUUID().toString().substring(0, 8);
         String customer = JSON.readTree(send(get("/api/v1/customers")).body()).get(0).get("id").asString();
         String order = post("/api/v1/customers/" + customer + "/orders", Map.of("purchaseOrder", "BENCH-" + suffix,
-                "materialSpecification", "benchmark, no requirements", "requirements", List.of()));
+                "materialSpecification", requirements.isEmpty() ? "benchmark, no requirements"
+                        : "benchmark requirements", "requirements", requirements));
         String heat = post("/api/v1/heats", Map.of("heatNumber", "BENCH-" + suffix, "producer", "Benchmark mill",
                 "grade", "benchmark steel", "productForm", "PLATE", "nominalThicknessMm", 4));
         String cell = post("/api/v1/equipment", Map.of("assetId", "BLC-" + suffix, "kind", "FORCE_TRANSDUCER",
