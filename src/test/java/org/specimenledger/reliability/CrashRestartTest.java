@@ -47,6 +47,9 @@ class CrashRestartTest {
                     t.start();
                     workers.add(t);
                 }
+                Thread m = new Thread(() -> work.manager(service.port(), stop), "manager");
+                m.start();
+                workers.add(m);
                 // a random moment: while benches are set up, during uploads, or deep into the run
                 Thread.sleep(1500 + random.nextInt(6000));
                 service.kill();
@@ -56,8 +59,10 @@ class CrashRestartTest {
                 }
             }
             System.out.printf("[reliability] crash and restart: %d SIGKILLs, %d uploads acknowledged, %d writes "
-                    + "acknowledged in all, %d ledger events, %d server errors, %d broken invariants%n", KILLS,
-                    work.uploads.get(), work.acknowledgedCount(), Invariants.events(ds), work.serverErrors.size(),
+                    + "acknowledged in all, %d certificate issues acknowledged (%d certificates stored), %d ledger events, "
+                    + "%d server errors, %d broken invariants%n", KILLS,
+                    work.uploads.get(), work.acknowledgedCount(), work.issues.get(), Invariants.certificates(ds),
+                    Invariants.events(ds), work.serverErrors.size(),
                     broken.size());
         }
         assertThat(broken).as("invariants after SIGKILL and restart").isEmpty();
