@@ -31,6 +31,8 @@ final class LabWorkload {
             "analysis_run", new CopyOnWriteArrayList<>(), "certificate", new CopyOnWriteArrayList<>()));
     final AtomicLong uploads = new AtomicLong();
     final AtomicLong issues = new AtomicLong();
+    /** Set while an issue request is out: a kill at that moment fell inside a certificate issue. */
+    final AtomicBoolean issueInFlight = new AtomicBoolean();
     final AtomicLong refusals = new AtomicLong();
     final List<String> serverErrors = new CopyOnWriteArrayList<>();
     /** 503 answers: the database was away; allowed while it is, and nothing may be stored by them. */
@@ -110,7 +112,9 @@ final class LabWorkload {
                 Map<String, Object> issue = new java.util.HashMap<>();
                 issue.put("password", PASSWORD);
                 issue.put("nonConformityStatement", "issued under the reliability workload; see the lines");
+                issueInFlight.set(true);
                 Api.Response issued = manager.post("/api/v1/certificates/drafts/" + draft.id() + "/issue", issue);
+                issueInFlight.set(false);
                 if (note(issued, "certificate", issued.json() == null ? null : issued.id())) {
                     issues.incrementAndGet();
                 }
