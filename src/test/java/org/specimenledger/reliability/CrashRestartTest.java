@@ -32,6 +32,7 @@ class CrashRestartTest {
         try (ScratchDatabase db = new ScratchDatabase(AdminDatabase.url(), "ledger_crash");
                 ServiceProcess service = new ServiceProcess(dir, db.url())) {
             PGSimpleDataSource ds = db.dataSource();
+            int killsDuringIssue = 0;
             for (int kill = 0; kill <= KILLS; kill++) {
                 service.start(Duration.ofMinutes(3));
                 for (String p : Invariants.check(ds, work.acknowledged)) {
@@ -47,17 +48,26 @@ class CrashRestartTest {
                     t.start();
                     workers.add(t);
                 }
+                Thread m = new Thread(() -> work.manager(service.port(), stop), "manager");
+                m.start();
+                workers.add(m);
                 // a random moment: while benches are set up, during uploads, or deep into the run
                 Thread.sleep(1500 + random.nextInt(6000));
+                if (work.issueInFlight.get()) {
+                    killsDuringIssue++;
+                }
                 service.kill();
+                work.issueInFlight.set(false);
                 stop.set(true);
                 for (Thread t : workers) {
                     t.join(30_000);
                 }
             }
             System.out.printf("[reliability] crash and restart: %d SIGKILLs, %d uploads acknowledged, %d writes "
-                    + "acknowledged in all, %d ledger events, %d server errors, %d broken invariants%n", KILLS,
-                    work.uploads.get(), work.acknowledgedCount(), Invariants.events(ds), work.serverErrors.size(),
+                    + "acknowledged in all, %d certificate issues acknowledged (%d certificates stored, %d kills during an issue request), %d ledger events, "
+                    + "%d server errors, %d broken invariants%n", KILLS,
+                    work.uploads.get(), work.acknowledgedCount(), work.issues.get(), Invariants.certificates(ds), killsDuringIssue,
+                    Invariants.events(ds), work.serverErrors.size(),
                     broken.size());
         }
         assertThat(broken).as("invariants after SIGKILL and restart").isEmpty();

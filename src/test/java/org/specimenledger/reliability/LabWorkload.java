@@ -8,6 +8,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicLong;
+import org.specimenledger.certificates.CertificateBench;
 import org.specimenledger.testing.ReliabilityBench;
 import org.specimenledger.testsupport.Api;
 
@@ -15,8 +16,9 @@ import org.specimenledger.testsupport.Api;
  * What technicians do all day, against a running service: on one bench (specimen with calibrated
  * instruments), register a run, upload its curve (analysed at once), now and then re-analyse it, and
  * register a retest. Every write the service acknowledges is noted by table and id, for {@link Invariants}.
- * A request that fails (the service was killed) ends the worker quietly. Hook: the certificates add a
- * manager worker issuing certificates here.
+ * A request that fails (the service was killed) ends the worker quietly. A lab manager meanwhile sets up an
+ * order with one tested specimen, drafts its certificate and issues it, over and over, so that kills also fall
+ * inside certificate issues.
  */
 final class LabWorkload {
 
@@ -26,8 +28,11 @@ final class LabWorkload {
 
     final Map<String, List<UUID>> acknowledged = new ConcurrentHashMap<>(Map.of(
             "test_run", new CopyOnWriteArrayList<>(), "raw_curve", new CopyOnWriteArrayList<>(),
-            "analysis_run", new CopyOnWriteArrayList<>()));
+            "analysis_run", new CopyOnWriteArrayList<>(), "certificate", new CopyOnWriteArrayList<>()));
     final AtomicLong uploads = new AtomicLong();
+    final AtomicLong issues = new AtomicLong();
+    /** Set while an issue request is out: a kill at that moment fell inside a certificate issue. */
+    final AtomicBoolean issueInFlight = new AtomicBoolean();
     final AtomicLong refusals = new AtomicLong();
     final List<String> serverErrors = new CopyOnWriteArrayList<>();
     /** 503 answers: the database was away; allowed while it is, and nothing may be stored by them. */
@@ -85,6 +90,37 @@ final class LabWorkload {
             // the service went away under us: that is the point of the exercise
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
+        }
+    }
+
+    /** The lab manager's loop: order, specimen and analysis set up, certificate drafted, issued; again. */
+    void manager(int port, AtomicBoolean stop) {
+        Api tech = new Api.Signed(port, TECHNICIAN, PASSWORD).api();
+        Api manager = new Api.Signed(port, MANAGER, PASSWORD).api();
+        try {
+            String customer = manager.get("/api/v1/customers").json().get(0).get("id").asString();
+            CertificateBench bench = new CertificateBench(tech, manager);
+            while (!stop.get()) {
+                CertificateBench.Order order = bench.order(customer,
+                        List.of(CertificateBench.requirement("Rm", "380", null, "MPa")), 1);
+                Api.Response draft = manager.post("/api/v1/certificates/drafts", Map.of("orderId", order.orderId(),
+                        "specimenIds", order.specimenIds(), "productDescription", "Hot-rolled plate 12 mm"));
+                if (draft.status() != 201) {
+                    note(draft, null, null);
+                    continue;
+                }
+                Map<String, Object> issue = new java.util.HashMap<>();
+                issue.put("password", PASSWORD);
+                issue.put("nonConformityStatement", "issued under the reliability workload; see the lines");
+                issueInFlight.set(true);
+                Api.Response issued = manager.post("/api/v1/certificates/drafts/" + draft.id() + "/issue", issue);
+                issueInFlight.set(false);
+                if (note(issued, "certificate", issued.json() == null ? null : issued.id())) {
+                    issues.incrementAndGet();
+                }
+            }
+        } catch (RuntimeException e) {
+            // the service went away under us
         }
     }
 
