@@ -1,6 +1,7 @@
 package org.specimenledger.reliability;
 
 import java.nio.charset.StandardCharsets;
+import java.time.Duration;
 import java.util.List;
 import java.util.Map;
 import java.util.UUID;
@@ -37,6 +38,9 @@ final class LabWorkload {
     final List<String> serverErrors = new CopyOnWriteArrayList<>();
     /** 503 answers: the database was away; allowed while it is, and nothing may be stored by them. */
     final AtomicLong unavailable = new AtomicLong();
+    /** A technician's wait between two tests and the manager's between two issues; none unless set. */
+    volatile Duration technicianPause = Duration.ZERO;
+    volatile Duration managerPause = Duration.ZERO;
 
     /** One technician's loop until {@code stop} is set or the service stops answering. */
     void technician(int port, AtomicBoolean stop) {
@@ -62,6 +66,9 @@ final class LabWorkload {
             }
             boolean first = true;
             while (!stop.get()) {
+                if (!first) {
+                    pause(technicianPause, stop);
+                }
                 Map<String, Object> registration = new java.util.HashMap<>(bench.registration());
                 if (!first) {
                     registration.put("retestReason", "repeat under the reliability workload");
@@ -100,7 +107,12 @@ final class LabWorkload {
         try {
             String customer = manager.get("/api/v1/customers").json().get(0).get("id").asString();
             CertificateBench bench = new CertificateBench(tech, manager);
+            boolean first = true;
             while (!stop.get()) {
+                if (!first) {
+                    pause(managerPause, stop);
+                }
+                first = false;
                 CertificateBench.Order order = bench.order(customer,
                         List.of(CertificateBench.requirement("Rm", "380", null, "MPa")), 1);
                 Api.Response draft = manager.post("/api/v1/certificates/drafts", Map.of("orderId", order.orderId(),
@@ -121,6 +133,13 @@ final class LabWorkload {
             }
         } catch (RuntimeException e) {
             // the service went away under us
+        }
+    }
+
+    private static void pause(Duration pause, AtomicBoolean stop) {
+        long until = System.nanoTime() + pause.toNanos();
+        while (!stop.get() && System.nanoTime() < until) {
+            java.util.concurrent.locks.LockSupport.parkNanos(Math.min(until - System.nanoTime(), 50_000_000L));
         }
     }
 

@@ -86,4 +86,21 @@ final class Wire {
     Answer get(String pathAndQuery) {
         return send("GET", pathAndQuery, null, null);
     }
+
+    /** The body of a GET as bytes (a PDF, say); {@code null} unless the status is 200. */
+    byte[] bytes(String pathAndQuery) {
+        HttpRequest.Builder b = HttpRequest.newBuilder(URI.create(base + pathAndQuery)).timeout(Duration.ofSeconds(60));
+        if (authorization != null) {
+            b.header("Authorization", authorization);
+        }
+        try {
+            HttpResponse<byte[]> r = HTTP.send(b.GET().build(), HttpResponse.BodyHandlers.ofByteArray());
+            return r.statusCode() == 200 ? r.body() : null;
+        } catch (IOException e) {
+            throw new IllegalStateException("GET " + pathAndQuery + " failed: " + e, e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException(e);
+        }
+    }
 }
