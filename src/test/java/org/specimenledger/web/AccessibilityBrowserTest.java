@@ -224,6 +224,36 @@ class AccessibilityBrowserTest extends IntegrationTest {
         assertThat(browser.consoleErrors()).isEmpty();
     }
 
+    /**
+     * The checks themselves, on a page made for them: they must pass what passes and name what fails. Reference
+     * points: black on white is 21:1, the top of the WCAG 2.1 contrast-ratio range (WCAG 2.1, definition of
+     * contrast ratio); #767676 on white is 4.54:1 and #777777 on white 4.48:1 (commonly cited; from memory, and
+     * they follow from the same definitions).
+     */
+    @Test
+    void theChecksFindWhatTheyLookFor() {
+        browser.driver.get("data:text/html;charset=utf-8," + java.net.URLEncoder.encode("""
+                <html><body style="background:#fff;margin:0"><main>
+                <p id="black" style="color:#000">black</p>
+                <p id="grey-passes" style="color:#767676">grey 767676</p>
+                <p id="grey-fails" style="color:#777777">grey 777777</p>
+                <p id="half-black" style="color:rgba(0,0,0,.5)">half black</p>
+                <p id="large-passes" style="color:#949494;font-size:24px">large</p>
+                <div style="background:rgba(0,0,0,.5)"><span id="on-half" style="color:#000">on half</span></div>
+                <input id="nameless"><label>named <input id="wrapped"></label>
+                <div id="wide" style="width:3000px">wide</div>
+                </main></body></html>""", StandardCharsets.UTF_8).replace("+", "%20"));
+        List<String> findings = pageChecks();
+        // black over half-transparent black over white is 5.28:1: passes only when the alpha is composited
+        assertThat(findings).noneMatch(f -> f.contains("#black") || f.contains("#grey-passes")
+                || f.contains("#large-passes") || f.contains("#wrapped") || f.contains("#on-half"));
+        // rgba(0,0,0,.5) over white is rgb(127.5, 127.5, 127.5): about 3.95:1
+        assertThat(findings).anyMatch(f -> f.startsWith("contrast: p#grey-fails") && f.contains("4.48:1"))
+                .anyMatch(f -> f.startsWith("contrast: p#half-black") && f.contains("3.9"))
+                .anyMatch(f -> f.startsWith("label: input#nameless"))
+                .anyMatch(f -> f.startsWith("width: ") && f.contains("div#wide"));
+    }
+
     // ---- checks ----
 
     @SuppressWarnings("unchecked")
