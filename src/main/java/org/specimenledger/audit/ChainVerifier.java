@@ -50,8 +50,8 @@ import tools.jackson.databind.json.JsonMapper;
 @Service
 public class ChainVerifier {
 
-    /** Rows per round trip: about 1.6 KB each, so a batch is a few MB per range, and fewer waits on the socket. */
-    private static final int FETCH_SIZE = 4000;
+    /** Rows per round trip: about 1.6 KB each, so about 1.6 MB per range; 4000 measured slower in a 128 MB heap. */
+    private static final int FETCH_SIZE = 1000;
     /** Below this many events one walk is quick enough; above it the chain is cut into parts checked at once. */
     static final long PARALLEL_FROM = 20_000;
     private static final int MAX_PARTS = 4;
