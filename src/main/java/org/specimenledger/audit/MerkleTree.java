@@ -56,6 +56,13 @@ public final class MerkleTree {
         return d.digest(data);
     }
 
+    /** SHA-256(0x00 ‖ data) on a digest the caller reuses (a long walk hashes millions of leaves). */
+    static byte[] leafHash(MessageDigest reused, byte[] data) {
+        reused.reset();
+        reused.update(LEAF_PREFIX);
+        return reused.digest(data);
+    }
+
     /** The leaf hash of one ledger event: over the UTF-8 bytes of its canonical text. */
     public static byte[] leafHash(String canonical) {
         return leafHash(canonical.getBytes(StandardCharsets.UTF_8));
