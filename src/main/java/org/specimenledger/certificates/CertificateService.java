@@ -26,15 +26,11 @@ import org.specimenledger.certificates.document.CertificateRenderer;
 import org.specimenledger.curve.RawCurve;
 import org.specimenledger.customers.CustomerDirectory;
 import org.specimenledger.customers.OrderView;
-import org.specimenledger.heats.HeatDirectory;
 import org.specimenledger.shared.ChangeReason;
 import org.specimenledger.shared.RecordNotFound;
 import org.specimenledger.shared.Role;
 import org.specimenledger.shared.RuleViolation;
 import org.specimenledger.shared.StateConflict;
-import org.specimenledger.specimens.SpecimenDirectory;
-import org.specimenledger.specimens.SpecimenView;
-import org.specimenledger.testing.AnalysisRunView;
 import org.specimenledger.testing.TestRunDirectory;
 import org.springframework.beans.factory.ObjectProvider;
 import org.springframework.stereotype.Service;
@@ -62,8 +58,6 @@ public class CertificateService {
     private final CertificateLines lineBuilder;
     private final CertificateReads reads;
     private final CustomerDirectory customers;
-    private final SpecimenDirectory specimens;
-    private final HeatDirectory heats;
     private final TestRunDirectory testRuns;
     private final AccountDirectory accounts;
     private final Ledger ledger;
@@ -73,15 +67,13 @@ public class CertificateService {
     private final Clock clock;
 
     CertificateService(CertificateStore store, CertificateLines lineBuilder, CertificateReads reads,
-            CustomerDirectory customers, SpecimenDirectory specimens, HeatDirectory heats, TestRunDirectory testRuns,
+            CustomerDirectory customers, TestRunDirectory testRuns,
             AccountDirectory accounts, Ledger ledger, Checkpoints checkpoints, ObjectProvider<CertificateRenderer> renderer,
             CertificateSettings settings, Clock clock) {
         this.store = store;
         this.lineBuilder = lineBuilder;
         this.reads = reads;
         this.customers = customers;
-        this.specimens = specimens;
-        this.heats = heats;
         this.testRuns = testRuns;
         this.accounts = accounts;
         this.ledger = ledger;

@@ -119,7 +119,7 @@ class TraceApiTest extends TestRunTesting {
         String run = register(b);
         String analysis = uploaded(run, TestRunFixtures.curve(b)).get("analysis").get("id").asString();
         String path = "/api/v1/trace/analyses/" + analysis;
-        assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
+        assertThat(replayIn(path).get("identical").asBoolean()).isTrue();
         String original = jdbc.sql("SELECT results::text FROM analysis_run WHERE id = ?::uuid").param(analysis)
                 .query(String.class).single();
         jdbc.sql("ALTER TABLE analysis_run DISABLE TRIGGER analysis_run_append_only").update();
@@ -128,7 +128,7 @@ class TraceApiTest extends TestRunTesting {
                     UPDATE analysis_run SET results = jsonb_set(results, '{properties,Rm,value}',
                         to_jsonb((results #>> '{properties,Rm,value}')::numeric + 1)) WHERE id = ?::uuid""")
                     .param(analysis).update();
-            JsonNode replay = manager().get(path).json().get("lines").get(0).get("replay");
+            JsonNode replay = replayIn(path);
             assertThat(replay.get("identical").asBoolean()).as(replay.toString()).isFalse();
             assertThat(replay.get("differences").toString()).contains("/results/properties/Rm/value");
         } finally {
@@ -136,7 +136,7 @@ class TraceApiTest extends TestRunTesting {
                     .update();
             jdbc.sql("ALTER TABLE analysis_run ENABLE TRIGGER analysis_run_append_only").update();
         }
-        assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
+        assertThat(replayIn(path).get("identical").asBoolean()).isTrue();
     }
 
     /**
@@ -150,7 +150,7 @@ class TraceApiTest extends TestRunTesting {
         String run = register(b);
         String analysis = uploaded(run, TestRunFixtures.curve(b)).get("analysis").get("id").asString();
         String path = "/api/v1/trace/analyses/" + analysis;
-        assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
+        assertThat(replayIn(path).get("identical").asBoolean()).isTrue();
         String curveId = jdbc.sql("SELECT raw_curve_id::text FROM analysis_run WHERE id = ?::uuid").param(analysis)
                 .query(String.class).single();
         byte[] original = jdbc.sql("SELECT content FROM raw_curve_content WHERE raw_curve_id = ?::uuid")
@@ -170,7 +170,7 @@ class TraceApiTest extends TestRunTesting {
         try {
             jdbc.sql("UPDATE raw_curve_content SET content = ? WHERE raw_curve_id = ?::uuid").params(changed, curveId)
                     .update();
-            JsonNode replay = manager().get(path).json().get("lines").get(0).get("replay");
+            JsonNode replay = replayIn(path);
             assertThat(replay.get("identical").asBoolean()).as(replay.toString()).isFalse();
             assertThat(replay.get("inputFingerprintMatches").asBoolean()).as(replay.toString()).isFalse();
         } finally {
@@ -180,7 +180,12 @@ class TraceApiTest extends TestRunTesting {
                     + " CHECK (encode(sha256(content), 'hex') = sha256)").update();
             jdbc.sql("ALTER TABLE raw_curve_content ENABLE TRIGGER raw_curve_content_append_only").update();
         }
-        assertThat(manager().get(path).json().get("lines").get(0).get("replay").get("identical").asBoolean()).isTrue();
+        assertThat(replayIn(path).get("identical").asBoolean()).isTrue();
+    }
+
+    /** The replay outcome of the first line of the trace at {@code path}, as the manager sees it. */
+    private JsonNode replayIn(String path) {
+        return manager().get(path).json().get("lines").get(0).get("replay");
     }
 
     @Test
