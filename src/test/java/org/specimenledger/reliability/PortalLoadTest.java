@@ -60,6 +60,8 @@ class PortalLoadTest {
             if (memory != null) {
                 service.env("LEDGER_PASSWORD_CHECK_MEMORY", memory); // PT0S: compare with the memory off
             }
+            // as a laboratory would run it: both JIT tiers (the crash tests stop at C1 for fast restarts), a fixed heap
+            service.jvmOptions(List.of(System.getProperty("reliability.load-jvm-options", "-Xms1g -Xmx1g").split(" ")));
             service.start(Duration.ofMinutes(3));
             Api manager = new Api.Signed(service.port(), LabWorkload.MANAGER, LabWorkload.PASSWORD).api();
             // the organisation whose certificates the demo laboratory issued, and their numbers

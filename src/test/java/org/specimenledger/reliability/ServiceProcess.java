@@ -28,10 +28,18 @@ final class ServiceProcess implements AutoCloseable {
     private int starts;
     private int hashStrength = 4;
     private final java.util.Map<String, String> environment = new java.util.HashMap<>();
+    /** Fast start for the crash tests, which restart the service dozens of times: small heap, C1 compiler only. */
+    private List<String> jvmOptions = List.of("-Xmx512m", "-XX:TieredStopAtLevel=1");
 
     /** bcrypt work factor of the started service: 4 (fast) for the crash tests, the production 11 for load. */
     ServiceProcess hashStrength(int strength) {
         this.hashStrength = strength;
+        return this;
+    }
+
+    /** Replaces the JVM options of the started service (e.g. the full JIT and a larger heap for the load run). */
+    ServiceProcess jvmOptions(List<String> options) {
+        this.jvmOptions = List.copyOf(options);
         return this;
     }
 
@@ -61,8 +69,7 @@ final class ServiceProcess implements AutoCloseable {
     void start(Duration patience) throws IOException, InterruptedException {
         List<String> command = new ArrayList<>();
         command.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
-        command.add("-Xmx512m");
-        command.add("-XX:TieredStopAtLevel=1");
+        command.addAll(jvmOptions);
         command.add("-Dledger.password-hash-strength=" + hashStrength);
         // the machine's PostgreSQL is shared with other builds: a small pool leaves connections for them
         command.add("-Dledger.db.pool-size=" + Integer.getInteger("reliability.pool-size", 8));
