@@ -3,6 +3,8 @@ package org.specimenledger.certificates;
 import com.github.benmanes.caffeine.cache.Cache;
 import com.github.benmanes.caffeine.cache.Caffeine;
 import java.time.Duration;
+import java.util.function.LongSupplier;
+import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.stereotype.Component;
 
 /**
@@ -18,8 +20,17 @@ class VerificationRateLimit {
     private final int capacity;
     private final double perNano;
     private final Cache<String, Bucket> buckets;
+    private final LongSupplier nanos;
 
+    @Autowired
     VerificationRateLimit(CertificateSettings settings) {
+        // monotonic time: a wall-clock step must not refill or drain buckets
+        this(settings, System::nanoTime);
+    }
+
+    /** With a time source of its own, so that tests can step time instead of waiting for it. */
+    VerificationRateLimit(CertificateSettings settings, LongSupplier nanos) {
+        this.nanos = nanos;
         this.capacity = settings.verifyCapacity();
         this.perNano = settings.verifyPerMinute() / 60e9;
         Duration refill = Duration.ofSeconds((long) Math.ceil(60.0 * capacity / settings.verifyPerMinute()) + 1);
@@ -28,7 +39,7 @@ class VerificationRateLimit {
 
     /** Takes one token for {@code client}; when none is left, the seconds until one will be. */
     long secondsToWait(String client) {
-        long now = nanos();
+        long now = nanos.getAsLong();
         Bucket bucket = buckets.get(client, k -> new Bucket(capacity, now));
         synchronized (bucket) {
             bucket.tokens = Math.min(capacity, bucket.tokens + (now - bucket.at) * perNano);
@@ -44,11 +55,6 @@ class VerificationRateLimit {
     /** Forgets every bucket (tests use it to leave no exhausted bucket behind). */
     void reset() {
         buckets.invalidateAll();
-    }
-
-    /** Monotonic time: a wall-clock step must not refill or drain buckets. */
-    private static long nanos() {
-        return System.nanoTime();
     }
 
     private static final class Bucket {
