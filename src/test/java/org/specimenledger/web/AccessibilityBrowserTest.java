@@ -53,8 +53,9 @@ import tools.jackson.databind.JsonNode;
  * <li>width: the page itself never scrolls sideways (SC 1.4.10 asks for 320 px; we check the two widths the
  * laboratory uses);</li>
  * <li>keyboard: Tab from the top reaches every interactive element of the main content in document order, each
- * with a focus indicator that differs from its unfocused look (SC 2.1.1, 2.4.3, 2.4.7); the sign-in and specimen
- * registration forms are filled and sent with the keyboard alone;</li>
+ * with a focus indicator that differs from its unfocused look (SC 2.1.1, 2.4.3, 2.4.7); signing in, registering a
+ * specimen, registering its test from the workbench and building a certificate draft are done with the keyboard
+ * alone (Tab, typing, Space, Enter; no clicks);</li>
  * <li>print: with print media emulated navigation and buttons are hidden and the main content shown; the
  * certificate page is printed to PDF ({@code target/screenshots/certificate-print.pdf}) and read back.</li>
  * </ul>
