@@ -67,6 +67,14 @@ class CertificateController {
         return reads.draft(id);
     }
 
+    @GetMapping(path = "/drafts/{id}/preview", produces = MediaType.APPLICATION_PDF_VALUE)
+    @PreAuthorize(Access.LAB_READERS)
+    @Operation(summary = "The PDF an open draft would print, marked as a preview: no number, signature or"
+            + " verification; stores nothing and writes no audit event")
+    ResponseEntity<byte[]> preview(@PathVariable UUID id) {
+        return DraftPreview.response(id, service.preview(id));
+    }
+
     @PutMapping("/drafts/{id}")
     @PreAuthorize(Access.MANAGER)
     @Operation(summary = "Change an open draft (reason required); its lines are rebuilt")

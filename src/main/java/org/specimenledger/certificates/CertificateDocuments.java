@@ -26,7 +26,7 @@ import org.specimenledger.testing.TestRunView;
 
 /**
  * Maps what an issue stores (the certificate row and its lines) and the records it refers to into the printed
- * {@link CertificateDocument}. Every printed result is the line's stored reported text, never recomputed here.
+ * {@link CertificateDocument}; a draft preview goes through the same mapping with the draft row instead. Every printed result is the line's stored reported text, never recomputed here.
  */
 final class CertificateDocuments {
 
@@ -43,7 +43,37 @@ final class CertificateDocuments {
             replaces, Optional<String> checkpoint) {
     }
 
+    /** What the certificate row (or, for a preview, the draft row) says in its own words. */
+    record Printed(String productDescription, String decisionRuleStatement, String deviations,
+            String nonConformityStatement) {
+    }
+
+    /** The issued certificate's document: its number, issue date, signatory and audit-trail position. */
     static CertificateDocument of(CertificateStore.Issued c, List<CertificateLine> lines, Sources s) {
+        return document(new CertificateDocument.Identification(c.number(), c.revision(), s.replaces(),
+                        Optional.empty(), c.issueDate()),
+                new Printed(c.productDescription(), c.decisionRuleStatement(), c.deviations(),
+                        c.nonConformityStatement()), lines, s,
+                Optional.of(new CertificateDocument.Signatory(c.signatoryName(), c.signatoryFunction(),
+                        c.issueDate())),
+                Optional.of(new CertificateDocument.Verification(c.verificationCode(), c.ledgerSeq(), c.ledgerHash(),
+                        s.checkpoint())));
+    }
+
+    /**
+     * A draft's preview: the same document from the same lines and records, with the revision it would get, and
+     * no number, issue date, signatory or verification (none exists before issue).
+     */
+    static CertificateDocument preview(CertificateStore.Draft d, int revision, List<CertificateLine> lines,
+            Sources s) {
+        return document(CertificateDocument.Identification.preview(revision, s.replaces()),
+                new Printed(d.productDescription(), d.decisionRule().rule().statement(), d.deviations(),
+                        d.nonConformityStatement()), lines, s, Optional.empty(), Optional.empty());
+    }
+
+    private static CertificateDocument document(CertificateDocument.Identification identification, Printed c,
+            List<CertificateLine> lines, Sources s, Optional<CertificateDocument.Signatory> signatory,
+            Optional<CertificateDocument.Verification> verification) {
         List<UUID> specimenOrder = lines.stream().map(CertificateLine::specimenId).distinct().toList();
         List<CertificateDocument.Heat> heats = specimenOrder.stream().map(id -> s.specimens().get(id).heatId())
                 .distinct().map(s.heats()::get).map(CertificateDocuments::heat).toList();
@@ -64,18 +94,13 @@ final class CertificateDocuments {
         }
         return new CertificateDocument(
                 new CertificateDocument.Laboratory(s.settings().laboratoryName(), s.settings().laboratoryAddress()),
-                new CertificateDocument.Identification(c.number(), c.revision(), s.replaces(), Optional.empty(),
-                        c.issueDate()),
+                identification,
                 new CertificateDocument.Customer(s.customer().name(), s.customer().address(),
                         s.order().purchaseOrder()),
                 new CertificateDocument.Product(c.productDescription(), s.order().materialSpecification()),
                 heats, specimens, conditions(runs, s.order()), lines.stream().map(l -> row(l, units(s.order()))).toList(),
                 c.decisionRuleStatement(), deviations(c, lines),
-                equipment(analyses), software(analyses),
-                new CertificateDocument.Signatory(c.signatoryName(), c.signatoryFunction(), c.issueDate()),
-                new CertificateDocument.Verification(c.verificationCode(), c.ledgerSeq(), c.ledgerHash(),
-                        s.checkpoint()),
-                appendix);
+                equipment(analyses), software(analyses), signatory, verification, appendix);
     }
 
     private static CertificateDocument.Heat heat(HeatView h) {
@@ -145,14 +170,18 @@ final class CertificateDocuments {
                 verdict, String.join(", ", l.flags()));
     }
 
-    /** Deviations as entered, then the non-conformity statement and each line that is not a pass. */
-    private static String deviations(CertificateStore.Issued c, List<CertificateLine> lines) {
+    /**
+     * Deviations as entered, then the non-conformity statement and each line that is not a pass. A draft may not
+     * have its statement yet (it can be given at issue): its preview says so instead of printing one.
+     */
+    private static String deviations(Printed c, List<CertificateLine> lines) {
         StringBuilder out = new StringBuilder();
         out.append(c.deviations() == null || c.deviations().isBlank() ? "No deviations from the test method."
                 : c.deviations().trim());
         List<CertificateLine> open = lines.stream().filter(l -> !l.passes()).toList();
         if (!open.isEmpty()) {
-            out.append("\nNON-CONFORMITY: ").append(c.nonConformityStatement().trim());
+            out.append("\nNON-CONFORMITY: ").append(c.nonConformityStatement() == null
+                    ? "(no statement yet: issuing needs one)" : c.nonConformityStatement().trim());
             for (CertificateLine l : open) {
                 out.append("\n- ").append(l.specimenLabel()).append(' ').append(l.property()).append(": ")
                         .append(Verdict.valueOf(l.verdict()).printable()).append(" (").append(l.verdictReason())

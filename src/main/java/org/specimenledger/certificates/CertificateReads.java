@@ -22,16 +22,42 @@ public class CertificateReads {
         this.store = store;
     }
 
-    /** A page of certificates. */
+    /** A page of certificates: {@code page} counts from 0, {@code total} is every match (counted in SQL). */
     public record Page(List<CertificateView> certificates, int page, int size, long total) {
+    }
+
+    /**
+     * What to search for; each part is off when null. {@code orderIds} and {@code heatIds} match any of theirs, and
+     * an empty list matches nothing: a purchase order or heat number that names nothing finds nothing.
+     */
+    public record Search(String number, List<UUID> orderIds, List<UUID> heatIds, LocalDate from, LocalDate to) {
+        public Search {
+            number = number == null || number.isBlank() ? null : number.trim();
+            orderIds = orderIds == null ? null : List.copyOf(orderIds);
+            heatIds = heatIds == null ? null : List.copyOf(heatIds);
+        }
     }
 
     /** Certificates matching the filters (each optional), newest first; a customer's list is their own. */
     @Transactional(readOnly = true)
     public Page list(String number, UUID orderId, UUID heatId, LocalDate from, LocalDate to, int page, int size) {
+        return search(new Search(number, orderId == null ? null : List.of(orderId),
+                heatId == null ? null : List.of(heatId), from, to), page, size);
+    }
+
+    /**
+     * One page of the certificates matching {@code search}, newest first, sliced and counted by the database; a
+     * customer's search is always within their own organisation.
+     */
+    @Transactional(readOnly = true)
+    public Page search(Search search, int page, int size) {
+        if (page < 0 || size < 1) {
+            throw new IllegalArgumentException("page from 0 and size from 1, were " + page + " and " + size);
+        }
         CertificateStore.Filter filter = new CertificateStore.Filter(CurrentUser.customerOrganisation().orElse(null),
-                number == null || number.isBlank() ? null : number.trim(), orderId, heatId, from, to);
-        List<CertificateView> found = store.search(filter, page * size, size).stream().map(this::view).toList();
+                search.number(), search.orderIds(), search.heatIds(), search.from(), search.to());
+        List<CertificateView> found = store.search(filter, (long) page * size, size).stream().map(this::view)
+                .toList();
         return new Page(found, page, size, store.count(filter));
     }
 

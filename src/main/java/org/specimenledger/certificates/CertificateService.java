@@ -15,6 +15,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.UUID;
+import java.util.stream.Collectors;
 import org.specimenledger.accounts.AccountDirectory;
 import org.specimenledger.accounts.AccountView;
 import org.specimenledger.audit.CheckpointView;
@@ -27,6 +28,7 @@ import org.specimenledger.curve.RawCurve;
 import org.specimenledger.customers.CustomerDirectory;
 import org.specimenledger.customers.OrderView;
 import org.specimenledger.shared.ChangeReason;
+import org.specimenledger.shared.FieldIssue;
 import org.specimenledger.shared.RecordNotFound;
 import org.specimenledger.shared.Role;
 import org.specimenledger.shared.RuleViolation;
@@ -44,6 +46,9 @@ import org.springframework.transaction.annotation.Transactional;
  * locked until commit (gap-free); the issue event is recorded and then a signed checkpoint, whose tree size is the
  * issue event's sequence number; the PDF printing that position is rendered, stored with its SHA-256 and a second
  * event records the hash. Any failure rolls all of it back, the number included.
+ *
+ * <p>Preview ({@link #preview}): the same lines and the same document mapping and renderer as issue, read-only, with
+ * no number, signatory or verification; it stores nothing, records no event and takes no lock.
  */
 @Service
 public class CertificateService {
@@ -140,6 +145,45 @@ public class CertificateService {
         DraftView after = reads.draftView(discarded);
         ledger.record("certificate-draft.discarded", DRAFT, id, reason, before, after);
         return after;
+    }
+
+    // ---- preview ----
+
+    /**
+     * The PDF a draft would print, marked on every page as a preview and not a certificate. Built from the draft's
+     * lines exactly as {@link #issue} builds them (the lines must still equal the saved ones, as there), mapped and
+     * rendered by the same code. Read-only: nothing stored, no ledger event, no number taken, no lock on the draft,
+     * the counter or the ledger head.
+     *
+     * @throws RecordNotFound when there is no such draft
+     * @throws StateConflict  when the draft is issued or discarded, when its lines can no longer be built, or when
+     *                        the results behind them changed since it was saved
+     */
+    @Transactional(readOnly = true)
+    public byte[] preview(UUID draftId) {
+        CertificateStore.Draft draft = store.draft(draftId).orElseThrow(() -> new RecordNotFound(DRAFT, draftId));
+        requireOpen(draft);
+        OrderView order = customers.order(draft.orderId()).orElseThrow();
+        CertificateLines.Built built;
+        try {
+            built = lineBuilder.buildWithRecords(order, draft.specimenIds(), draft.decisionRule());
+        } catch (RuleViolation e) {
+            throw new StateConflict("the lines of draft " + draftId + " can no longer be built: " + e.issues().stream()
+                    .map(FieldIssue::detail).collect(Collectors.joining("; "))
+                    + "; change the draft's specimens before previewing or issuing it");
+        }
+        requireUnchanged(draft.lines(), built.lines());
+        Optional<CertificateStore.Issued> replaced = Optional.ofNullable(draft.revisesCertificateId())
+                .flatMap(store::issued);
+        replaced.ifPresent(r -> store.statusChange(r.id()).ifPresent(change -> {
+            throw new StateConflict("certificate " + r.number() + " revision " + r.revision() + " is already "
+                    + change.status().toLowerCase() + "; this revision draft can no longer be issued");
+        }));
+        int revision = replaced.map(r -> r.revision() + 1).orElse(0);
+        CertificateDocuments.Sources sources = sources(built, order, draft.includeCurves(),
+                replaced.map(r -> new CertificateDocument.Replacement(r.number(), r.revision(), draft.revisionReason())),
+                Optional.empty());
+        return renderer.getObject().render(CertificateDocuments.preview(draft, revision, built.lines(), sources));
     }
 
     // ---- issue ----
@@ -311,14 +355,18 @@ public class CertificateService {
 
     private CertificateStore.Draft openDraft(UUID id) {
         CertificateStore.Draft draft = store.lockDraft(id).orElseThrow(() -> new RecordNotFound(DRAFT, id));
+        requireOpen(draft);
+        return draft;
+    }
+
+    private void requireOpen(CertificateStore.Draft draft) {
         if (!"OPEN".equals(draft.state())) {
             String detail = "ISSUED".equals(draft.state())
                     ? " as " + store.issued(draft.issuedCertificateId()).map(c -> c.number() + " revision "
                             + c.revision()).orElse("a certificate") + "; a change needs a revision of the certificate"
                     : "";
-            throw new StateConflict("certificate draft " + id + " is " + draft.state().toLowerCase() + detail);
+            throw new StateConflict("certificate draft " + draft.id() + " is " + draft.state().toLowerCase() + detail);
         }
-        return draft;
     }
 
     private static void requireUnchanged(List<CertificateLine> saved, List<CertificateLine> now) {
@@ -338,23 +386,27 @@ public class CertificateService {
     /** Renders from the records the lines were built from (same transaction), plus each specimen's stored curve. */
     private byte[] render(CertificateStore.Issued c, CertificateLines.Built built, OrderView order, boolean curves,
             CertificateStore.Issued replaced, CheckpointView checkpoint) {
-        List<CertificateLine> lines = built.lines();
+        CertificateDocuments.Sources sources = sources(built, order, curves,
+                Optional.ofNullable(replaced).map(r -> new CertificateDocument.Replacement(r.number(), r.revision(),
+                        c.revisionReason())),
+                Optional.of("checkpoint " + checkpoint.id() + ": tree size " + checkpoint.treeSize() + ", root "
+                        + checkpoint.rootHash() + ", key " + checkpoint.keyId().substring(0, 16)));
+        return renderer.getObject().render(CertificateDocuments.of(c, built.lines(), sources));
+    }
+
+    /** What a certificate or a preview prints besides its lines: the records read with them and the curves. */
+    private CertificateDocuments.Sources sources(CertificateLines.Built built, OrderView order, boolean curves,
+            Optional<CertificateDocument.Replacement> replaces, Optional<String> checkpoint) {
         Map<UUID, RawCurve> curveData = new HashMap<>();
         if (curves) {
-            for (CertificateLine l : lines) {
+            for (CertificateLine l : built.lines()) {
                 if (!curveData.containsKey(l.specimenId())) {
                     testRuns.curveOf(l.testRunId()).ifPresent(curve -> curveData.put(l.specimenId(), curve));
                 }
             }
         }
-        CertificateDocuments.Sources sources = new CertificateDocuments.Sources(settings,
-                customers.customer(order.customerId()).orElseThrow(), order, built.specimens(), built.heats(),
-                built.runs(), built.analyses(), curveData,
-                Optional.ofNullable(replaced).map(r -> new CertificateDocument.Replacement(r.number(), r.revision(),
-                        c.revisionReason())),
-                Optional.of("checkpoint " + checkpoint.id() + ": tree size " + checkpoint.treeSize() + ", root "
-                        + checkpoint.rootHash() + ", key " + checkpoint.keyId().substring(0, 16)));
-        return renderer.getObject().render(CertificateDocuments.of(c, lines, sources));
+        return new CertificateDocuments.Sources(settings, customers.customer(order.customerId()).orElseThrow(), order,
+                built.specimens(), built.heats(), built.runs(), built.analyses(), curveData, replaces, checkpoint);
     }
 
     private static CertificateStore.Draft withState(CertificateStore.Draft d, String state, UUID issued) {

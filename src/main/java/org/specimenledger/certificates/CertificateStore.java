@@ -201,33 +201,44 @@ class CertificateStore {
                 .query(CertificateStore::issuedRow).list();
     }
 
-    /** A page of certificates matching the filters (each null when not used), newest first. */
-    List<Issued> search(Filter f, int offset, int limit) {
+    /**
+     * A page of certificates matching the filters, newest first; the slice is the database's ({@code OFFSET} and
+     * {@code LIMIT}), in an order that is total (number and revision break ties), so pages never overlap.
+     */
+    List<Issued> search(Filter f, long offset, int limit) {
         return jdbc.sql(ISSUED + " " + WHERE + " ORDER BY issued_at DESC, number DESC, revision DESC OFFSET ? LIMIT ?")
                 .params(filterParams(f, offset, limit)).query(CertificateStore::issuedRow).list();
     }
 
+    /** How many certificates match the filters, counted by the database with the same condition. */
     long count(Filter f) {
         return jdbc.sql("SELECT count(*) FROM certificate c " + WHERE).params(filterParams(f)).query(Long.class)
                 .single();
     }
 
-    /** List filters; {@code heatId} matches a certificate with a line on that heat; dates are issue dates. */
-    record Filter(UUID customerId, String number, UUID orderId, UUID heatId, LocalDate from, LocalDate to) {
+    /**
+     * List filters. Each is off when null; {@code orderIds} and {@code heatIds} match any of theirs, and an empty
+     * list matches nothing (a search that names nothing finds nothing, never everything). {@code heatIds} matches a
+     * certificate with a line on one of those heats; dates are issue dates.
+     */
+    record Filter(UUID customerId, String number, List<UUID> orderIds, List<UUID> heatIds, LocalDate from,
+            LocalDate to) {
     }
 
     private static final String WHERE = """
              WHERE (?::uuid IS NULL OR c.customer_id = ?)
                AND (?::text IS NULL OR c.number = ?)
-               AND (?::uuid IS NULL OR c.order_id = ?)
-               AND (?::uuid IS NULL OR EXISTS (SELECT 1 FROM certificate_line l
-                                               WHERE l.certificate_id = c.id AND l.heat_id = ?))
+               AND (?::uuid[] IS NULL OR c.order_id = ANY (?::uuid[]))
+               AND (?::uuid[] IS NULL OR EXISTS (SELECT 1 FROM certificate_line l
+                                                 WHERE l.certificate_id = c.id AND l.heat_id = ANY (?::uuid[])))
                AND (?::date IS NULL OR c.issue_date >= ?)
                AND (?::date IS NULL OR c.issue_date <= ?)""";
 
     private static List<Object> filterParams(Filter f, Object... more) {
+        String orders = f.orderIds() == null ? null : uuidArray(f.orderIds());
+        String heats = f.heatIds() == null ? null : uuidArray(f.heatIds());
         List<Object> p = new ArrayList<>(Arrays.asList(f.customerId(), f.customerId(), f.number(), f.number(),
-                f.orderId(), f.orderId(), f.heatId(), f.heatId(), f.from(), f.from(), f.to(), f.to()));
+                orders, orders, heats, heats, f.from(), f.from(), f.to(), f.to()));
         p.addAll(Arrays.asList(more));
         return p;
     }

@@ -10,6 +10,7 @@ import org.specimenledger.certificates.CertificateRequests;
 import org.specimenledger.certificates.CertificateService;
 import org.specimenledger.certificates.CertificateView;
 import org.specimenledger.certificates.DecisionRuleChoice;
+import org.specimenledger.certificates.DraftPreview;
 import org.specimenledger.certificates.DraftView;
 import org.specimenledger.certificates.document.CertificateDocument;
 import org.specimenledger.customers.CustomerDirectory;
@@ -27,6 +28,7 @@ import org.springframework.http.ResponseEntity;
 import org.springframework.security.access.prepost.PreAuthorize;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
+import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -36,8 +38,9 @@ import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 /**
  * The lab manager's certificate pages: choose an order and its tested specimens, review the draft's lines and
  * verdicts, issue with the password re-entered as the signature, revise or withdraw with a reason. Every write
- * goes through {@link CertificateService} exactly as the API's; the pages decide nothing of their own. The draft
- * preview is its lines table (the PDF exists only once issued: it is rendered in the issue transaction).
+ * goes through {@link CertificateService} exactly as the API's; the pages decide nothing of their own. The draft page
+ * shows the lines table and links to the PDF preview ({@link CertificateService#preview}: rendered on request,
+ * marked as a preview on every page, never stored).
  */
 @Controller
 class CertificateDesk {
@@ -107,6 +110,27 @@ class CertificateDesk {
     @PreAuthorize(Access.MANAGER)
     String draft(@PathVariable UUID id, Model model) {
         return draftPage(model, reads.draft(id), List.of());
+    }
+
+    /** The draft's PDF preview, from the same service call as the API's (marked, not stored, no event). */
+    @GetMapping("/lab/certificates/drafts/{id}/preview")
+    @PreAuthorize(Access.MANAGER)
+    ResponseEntity<byte[]> preview(@PathVariable UUID id) {
+        return DraftPreview.response(id, service.preview(id));
+    }
+
+    /**
+     * Only the preview lets a state conflict out (the forms catch theirs and show them on the draft page): a draft
+     * that is issued or discarded, or whose lines can no longer be built, gets the problem page with 409.
+     */
+    @ExceptionHandler(StateConflict.class)
+    String conflict(StateConflict e, Model model, HttpServletResponse response) {
+        response.setStatus(409);
+        model.addAttribute("me", CurrentUser.get().orElse(null));
+        model.addAttribute("nav", CurrentUser.get().map(u -> Navigation.of(u.role())).orElse(null));
+        model.addAttribute("title", "No preview of this draft");
+        model.addAttribute("message", e.getMessage());
+        return "problem";
     }
 
     @PostMapping("/lab/certificates/drafts/{id}/issue")

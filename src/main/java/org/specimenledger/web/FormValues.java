@@ -1,6 +1,8 @@
 package org.specimenledger.web;
 
 import java.math.BigDecimal;
+import java.time.LocalDate;
+import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -45,6 +47,20 @@ final class FormValues {
             }
         }
         return out;
+    }
+
+    /** A calendar date as ISO 8601 writes it (2026-03-09), the form a date input sends. Blank is null. */
+    static LocalDate date(String s, String pointer, List<FieldIssue> problems) {
+        String t = text(s);
+        if (t == null) {
+            return null;
+        }
+        try {
+            return LocalDate.parse(t);
+        } catch (DateTimeParseException e) {
+            problems.add(new FieldIssue(pointer, "'" + t + "' is not a date (year-month-day, e.g. 2026-03-09)"));
+            return null;
+        }
     }
 
     static UUID uuid(String s, String pointer, List<FieldIssue> problems) {

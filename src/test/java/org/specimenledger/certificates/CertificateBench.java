@@ -48,6 +48,19 @@ public final class CertificateBench {
         calibrate(extensometer, Map.of("accuracyClass", "1"));
     }
 
+    /** The bench's testing machine, force transducer and extensometer (ids), for forms that choose them. */
+    public String machineId() {
+        return machine;
+    }
+
+    public String transducerId() {
+        return transducer;
+    }
+
+    public String extensometerId() {
+        return extensometer;
+    }
+
     /** A requirement body: property, min, max (either may be null), unit. */
     public static Map<String, Object> requirement(String property, String min, String max, String unit) {
         Map<String, Object> r = new HashMap<>();

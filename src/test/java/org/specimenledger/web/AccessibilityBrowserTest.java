@@ -39,6 +39,7 @@ import org.springframework.web.bind.annotation.RestController;
 import org.springframework.web.method.HandlerMethod;
 import org.springframework.web.servlet.mvc.method.RequestMappingInfo;
 import org.springframework.web.servlet.mvc.method.annotation.RequestMappingHandlerMapping;
+import tools.jackson.databind.JsonNode;
 
 /**
  * Accessible basics of every page, in a real headless Chromium, for each role that may open the page, at 1280 px and
@@ -52,8 +53,9 @@ import org.springframework.web.servlet.mvc.method.annotation.RequestMappingHandl
  * <li>width: the page itself never scrolls sideways (SC 1.4.10 asks for 320 px; we check the two widths the
  * laboratory uses);</li>
  * <li>keyboard: Tab from the top reaches every interactive element of the main content in document order, each
- * with a focus indicator that differs from its unfocused look (SC 2.1.1, 2.4.3, 2.4.7); the sign-in and specimen
- * registration forms are filled and sent with the keyboard alone;</li>
+ * with a focus indicator that differs from its unfocused look (SC 2.1.1, 2.4.3, 2.4.7); signing in, registering a
+ * specimen, registering its test from the workbench and building a certificate draft are done with the keyboard
+ * alone (Tab, typing, Space, Enter; no clicks);</li>
  * <li>print: with print media emulated navigation and buttons are hidden and the main content shown; the
  * certificate page is printed to PDF ({@code target/screenshots/certificate-print.pdf}) and read back.</li>
  * </ul>
@@ -225,6 +227,115 @@ class AccessibilityBrowserTest extends IntegrationTest {
     }
 
     /**
+     * A technician goes from the workbench to a new specimen, opens its test registration and registers the test with
+     * Tab, typing (a closed select takes the typed start of an option, as Chromium's type-ahead does) and Enter only.
+     */
+    @Test
+    void testRunRegistrationFromTheWorkbenchWorksWithTheKeyboardAlone() {
+        CertificateBench bench = new CertificateBench(as(TestAccounts.TECHNICIAN), as(TestAccounts.MANAGER));
+        CertificateBench.Order order = bench.order(organisations.get(TestAccounts.CUSTOMER), passing(), 1);
+        String mark = SpecimenFixtures.mark();
+        Api.Response specimen = as(TestAccounts.TECHNICIAN).post("/api/v1/specimens",
+                SpecimenFixtures.roundBar(mark, order.heatId(), order.orderId()));
+        assertThat(specimen.status()).as(specimen.toString()).isEqualTo(201);
+        signInWithTheKeyboard(TestAccounts.TECHNICIAN, "/lab");
+
+        tabToElement(browser.find("#main a[href='/lab/specimens/" + specimen.id() + "']"));
+        type(Keys.ENTER);
+        browser.waiting().until(d -> browser.path().equals("/lab/specimens/" + specimen.id()));
+        tabTo("register-test");
+        type(Keys.ENTER);
+        browser.waiting().until(d -> browser.path().equals("/lab/tests/new"));
+        tabTo("machineId");
+        chooseByTyping(asset(bench.machineId()), bench.machineId());
+        tabTo("forceTransducerId");
+        chooseByTyping(asset(bench.transducerId()), bench.transducerId());
+        tabTo("forceRangeN");
+        type("100000");
+        tabTo("extensometerId");
+        chooseByTyping(asset(bench.extensometerId()), bench.extensometerId());
+        tabTo("temperatureC");
+        // replace the default temperature: select all with Ctrl+A, then type over it
+        new Actions(browser.driver).keyDown(Keys.CONTROL).sendKeys("a").keyUp(Keys.CONTROL).sendKeys("21.5").perform();
+        tabToElement(browser.find("#test-run-form button[type=submit]"));
+        type(Keys.ENTER);
+        waitForPath("/lab/tests/[0-9a-f-]{36}");
+        String run = browser.path().substring("/lab/tests/".length());
+        JsonNode registered = as(TestAccounts.TECHNICIAN).get("/api/v1/tests/" + run).json();
+        assertThat(registered.get("specimenId").asString()).isEqualTo(specimen.id());
+        assertThat(registered.get("machineId").asString()).isEqualTo(bench.machineId());
+        assertThat(registered.get("extensometerId").asString()).isEqualTo(bench.extensometerId());
+        assertThat(registered.get("temperatureC").decimalValue()).isEqualByComparingTo("21.5");
+        browser.screenshot("a11y-test-run-registered-by-keyboard");
+        assertThat(browser.consoleErrors()).isEmpty();
+    }
+
+    /**
+     * A lab manager chooses an order, keeps its specimens, picks the guard-banded rule, asks for curve pages with
+     * Space and builds the draft with Enter; the draft page's preview link is then one Tab stop away.
+     */
+    @Test
+    void certificateDraftWorksWithTheKeyboardAlone() {
+        CertificateBench bench = new CertificateBench(as(TestAccounts.TECHNICIAN), as(TestAccounts.MANAGER));
+        CertificateBench.Order order = bench.order(organisations.get(TestAccounts.CUSTOMER), passing(), 2);
+        String purchaseOrder = as(TestAccounts.MANAGER).get("/api/v1/orders/" + order.orderId()).json()
+                .get("purchaseOrder").asString();
+        signInWithTheKeyboard(TestAccounts.MANAGER, "/lab");
+
+        browser.open("/lab/certificates");
+        tabTo("orderId");
+        chooseByTyping(purchaseOrder, order.orderId());
+        tabToElement(browser.find("#choose-order button[type=submit]"));
+        type(Keys.ENTER);
+        browser.waiting().until(d -> browser.path().equals("/lab/certificates/new"));
+        assertThat(browser.all("input[name=specimenIds]:checked")).hasSize(2);
+        tabTo("decisionRule");
+        chooseWithArrows("GUARD_BANDED");
+        tabTo("productDescription");
+        type("Hot-rolled round bar, 20 mm, typed");
+        tabToElement(browser.find("#draft-form input[name=includeCurves]"));
+        type(Keys.SPACE);
+        assertThat(browser.find("#draft-form input[name=includeCurves]").isSelected()).isTrue();
+        tabToElement(browser.find("#draft-form button[type=submit]"));
+        type(Keys.ENTER);
+        waitForPath("/lab/certificates/drafts/[0-9a-f-]{36}");
+        String draftId = browser.path().substring("/lab/certificates/drafts/".length());
+        JsonNode draft = as(TestAccounts.MANAGER).get("/api/v1/certificates/drafts/" + draftId).json();
+        assertThat(draft.get("orderId").asString()).isEqualTo(order.orderId());
+        assertThat(draft.get("decisionRule").asString()).isEqualTo("GUARD_BANDED");
+        assertThat(draft.get("includeCurves").asBoolean()).isTrue();
+        assertThat(draft.get("productDescription").asString()).isEqualTo("Hot-rolled round bar, 20 mm, typed");
+        assertThat(draft.get("specimenIds")).hasSize(2);
+        tabTo("preview-pdf");
+        browser.screenshot("a11y-certificate-draft-by-keyboard");
+        assertThat(browser.consoleErrors()).isEmpty();
+    }
+
+    /** Waits for a page whose path matches {@code regex}; a timeout names the page reached and what it shows. */
+    private static void waitForPath(String regex) {
+        try {
+            browser.waiting().until(d -> browser.path().matches(regex));
+        } catch (org.openqa.selenium.TimeoutException e) {
+            browser.screenshot("a11y-keyboard-stuck");
+            throw new AssertionError("expected a page at " + regex + ", still at " + browser.path() + ": "
+                    + browser.find("main").getText(), e);
+        }
+    }
+
+    private static void signInWithTheKeyboard(String username, String startPage) {
+        browser.open("/sign-in");
+        tabTo("username");
+        type(username);
+        tabTo("password");
+        type(TestAccounts.PASSWORD + Keys.ENTER);
+        browser.waiting().until(d -> browser.path().equals(startPage));
+    }
+
+    private String asset(String equipmentId) {
+        return as(TestAccounts.TECHNICIAN).get("/api/v1/equipment/" + equipmentId).json().get("assetId").asString();
+    }
+
+    /**
      * The checks themselves, on a page made for them: they must pass what passes and name what fails. Reference
      * points: black on white is 21:1, the top of the WCAG 2.1 contrast-ratio range (WCAG 2.1, definition of
      * contrast ratio); #767676 on white is 4.54:1 and #777777 on white 4.48:1 (commonly cited; from memory, and
@@ -333,6 +444,28 @@ class AccessibilityBrowserTest extends IntegrationTest {
             }
         }
         throw new AssertionError("Tab never reached #" + id);
+    }
+
+    /** Tabs forward until {@code target} has the focus (the test finds the element; only the keyboard moves). */
+    private static void tabToElement(WebElement target) {
+        for (int i = 0; i < 80; i++) {
+            new Actions(browser.driver).sendKeys(Keys.TAB).perform();
+            if (target.equals(browser.driver.switchTo().activeElement())) {
+                return;
+            }
+        }
+        throw new AssertionError("Tab never reached " + target.getTagName() + " " + target.getText());
+    }
+
+    /**
+     * Types the start of an option's text into the focused, closed select: Chromium's type-ahead picks the first
+     * option starting with what was typed (for long lists, where the arrow keys would take hundreds of presses).
+     */
+    private static void chooseByTyping(String optionStart, String value) {
+        WebElement select = browser.driver.switchTo().activeElement();
+        assertThat(select.getTagName()).isEqualTo("select");
+        new Actions(browser.driver).sendKeys(optionStart).perform();
+        assertThat(select.getDomProperty("value")).as("chosen by typing '%s'", optionStart).isEqualTo(value);
     }
 
     private static void type(CharSequence keys) {

@@ -14,8 +14,11 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.StaleElementReferenceException;
+import org.openqa.selenium.WebElement;
 import org.openqa.selenium.support.ui.Select;
 import org.specimenledger.certificates.CertificateBench;
+import org.specimenledger.certificates.document.CertificateDocument;
+import org.specimenledger.certificates.document.PdfReadBack;
 import org.specimenledger.testsupport.Api;
 import org.specimenledger.testsupport.IntegrationTest;
 import org.specimenledger.testsupport.TestAccounts;
@@ -70,12 +73,12 @@ class CertificatePagesBrowserTest extends IntegrationTest {
         browser.find("#number").sendKeys(ours);
         browser.find("#certificate-search button[type=submit]").click();
         browser.waiting().until(d -> browser.all("#certificates tbody tr").size() == 1);
-        assertThat(browser.find("#certificate-" + ours).getText()).contains("valid");
-        assertThat(browser.all("#certificate-" + theirs)).isEmpty();
+        assertThat(browser.find("#certificate-" + ours + "-rev0").getText()).contains("valid");
+        assertThat(browser.all("[data-number='" + theirs + "']")).isEmpty();
         browser.screenshot("portal-search");
         assertThat(browser.consoleErrors()).isEmpty();
 
-        browser.find("#certificate-" + ours + " a").click();
+        browser.find("#certificate-" + ours + "-rev0 a").click();
         browser.waiting().until(d -> browser.path().equals("/portal/certificates/" + ours));
         assertThat(browser.find("#verification-code").getText()).matches("[0-9a-f]{32}");
         assertThat(browser.find("#pdf-sha256").getText()).isEqualTo(sha256(stored));
@@ -119,6 +122,21 @@ class CertificatePagesBrowserTest extends IntegrationTest {
         assertThat(browser.find("#line-1 .verdict").getText()).isEqualTo("pass");
         assertThat(browser.find("#signature-meaning").getText()).isEqualTo("reviewed and approved for release");
         browser.screenshot("certificate-draft");
+        assertThat(browser.consoleErrors()).isEmpty();
+
+        // the preview link of the draft page answers with the PDF, marked as a preview, fetched by the browser itself
+        String draftPath = browser.path();
+        WebElement previewLink = browser.find("#preview-pdf");
+        assertThat(previewLink.getText()).isEqualTo("Preview as PDF");
+        assertThat(previewLink.getAttribute("href")).endsWith(draftPath + "/preview");
+        Map<String, Object> preview = fetchWithHeaders(previewLink.getAttribute("href"));
+        assertThat(preview.get("status")).isEqualTo(200L);
+        assertThat(preview.get("type")).isEqualTo("application/pdf");
+        assertThat(preview.get("preview")).isEqualTo("true");
+        byte[] previewPdf = Base64.getDecoder().decode((String) preview.get("body"));
+        assertThat(new String(previewPdf, 0, 5, java.nio.charset.StandardCharsets.US_ASCII)).isEqualTo("%PDF-");
+        assertThat(PdfReadBack.text(previewPdf)).contains(CertificateDocument.PREVIEW_HEADER,
+                "Hot-rolled round bar, 20 mm").doesNotContainPattern("IC-\\d{4}-\\d{5}");
         assertThat(browser.consoleErrors()).isEmpty();
 
         browser.find("#password").sendKeys("not-the-password");
@@ -284,6 +302,19 @@ class CertificatePagesBrowserTest extends IntegrationTest {
                   done(btoa(s));
                 }).catch(e => done('error ' + e));""", href);
         return Base64.getDecoder().decode((String) b64);
+    }
+
+    /** Fetches {@code href} in the page's session: status, content type, the Draft-Preview header, body in base64. */
+    @SuppressWarnings("unchecked")
+    private static Map<String, Object> fetchWithHeaders(String href) {
+        return (Map<String, Object>) browser.driver.executeAsyncScript("""
+                var done = arguments[arguments.length - 1];
+                fetch(arguments[0], {credentials: 'same-origin'}).then(r => r.arrayBuffer().then(buf => {
+                  var s = ''; var bytes = new Uint8Array(buf);
+                  for (var i = 0; i < bytes.length; i++) { s += String.fromCharCode(bytes[i]); }
+                  done({status: r.status, type: r.headers.get('Content-Type'),
+                        preview: r.headers.get('Draft-Preview'), body: btoa(s)});
+                })).catch(e => done({status: -1, error: '' + e}));""", href);
     }
 
     private static String sha256(byte[] bytes) throws Exception {

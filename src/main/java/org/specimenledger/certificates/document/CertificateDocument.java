@@ -11,6 +11,11 @@ import java.util.Optional;
  * reproduced from this record alone. Texts are printed literally (no markup); control characters are
  * shown as their code point by the renderer.
  *
+ * <p>A document is either an issued certificate (number, issue date, signatory and verification all present) or a
+ * draft preview (all four absent, {@link #isPreview()}): the preview prints {@link #PREVIEW_HEADER} and
+ * {@link #PREVIEW_FOOTER} on every page and {@link #PREVIEW_WATERMARK} across it, and nothing that could pass for an
+ * issued certificate's identity. No field of an issued certificate is ever filled with a stand-in value.
+ *
  * <p>Content follows ISO/IEC 17025:2017 7.8.2.1 (title, laboratory, unique identification on every page,
  * customer, method, items, dates, results with units, the items-tested statement, deviations, who
  * authorised), 7.8.6 (decision rule) and 7.8.8 (a revision names the document it replaces and why).
@@ -28,8 +33,8 @@ public record CertificateDocument(
         String deviationsStatement,
         List<Equipment> equipment,
         Software software,
-        Signatory signatory,
-        Verification verification,
+        Optional<Signatory> signatory,
+        Optional<Verification> verification,
         List<CurveAppendix> appendix) {
 
     /** The document type title printed at the top of every certificate. */
@@ -45,7 +50,32 @@ public record CertificateDocument(
     /** What the authorised signature means, printed beside it. */
     public static final String SIGNATURE_MEANING = "reviewed and approved for release";
 
-    /** Checks that no part is missing and copies the lists. */
+    /** The line printed at the top of every page of a draft preview. */
+    public static final String PREVIEW_HEADER = "PREVIEW OF A DRAFT · NOT A CERTIFICATE · NOT VALID FOR ANY PURPOSE";
+
+    /** The word printed large across every page of a draft preview. */
+    public static final String PREVIEW_WATERMARK = "DRAFT PREVIEW";
+
+    /** The footer of every page of a draft preview (the page count follows it). */
+    public static final String PREVIEW_FOOTER = "Draft preview, not issued: no certificate number, no signature,"
+            + " cannot be verified";
+
+    /** An issued certificate's document: every part present. */
+    public CertificateDocument(Laboratory laboratory, Identification identification, Customer customer,
+            Product product, List<Heat> heats, List<Specimen> specimens, TestConditions conditions,
+            List<ResultRow> results, String decisionRuleStatement, String deviationsStatement,
+            List<Equipment> equipment, Software software, Signatory signatory, Verification verification,
+            List<CurveAppendix> appendix) {
+        this(laboratory, identification, customer, product, heats, specimens, conditions, results,
+                decisionRuleStatement, deviationsStatement, equipment, software,
+                Optional.of(Objects.requireNonNull(signatory, "signatory")),
+                Optional.of(Objects.requireNonNull(verification, "verification")), appendix);
+    }
+
+    /**
+     * Checks that no part is missing, that a certificate has its signatory and verification and a preview neither,
+     * and copies the lists.
+     */
     public CertificateDocument {
         Objects.requireNonNull(laboratory, "laboratory");
         Objects.requireNonNull(identification, "identification");
@@ -62,6 +92,18 @@ public record CertificateDocument(
         Objects.requireNonNull(signatory, "signatory");
         Objects.requireNonNull(verification, "verification");
         appendix = List.copyOf(appendix);
+        boolean preview = identification.number().isEmpty();
+        if (preview && (signatory.isPresent() || verification.isPresent())) {
+            throw new IllegalArgumentException("a draft preview has no signatory and no verification");
+        }
+        if (!preview && (signatory.isEmpty() || verification.isEmpty())) {
+            throw new IllegalArgumentException("an issued certificate needs its signatory and verification");
+        }
+    }
+
+    /** True for a draft preview: no number, issue date, signatory or verification. */
+    public boolean isPreview() {
+        return identification.number().isEmpty();
     }
 
     /** The issuing laboratory; the address may span several lines. */
@@ -75,12 +117,14 @@ public record CertificateDocument(
     /**
      * Number, revision and status of this document.
      *
+     * @param number           the certificate number; empty for a draft preview (a number is taken only at issue)
      * @param replaces         what this revision replaces, empty for revision 0
      * @param statusWatermark  printed across every page when this is not the current valid document,
-     *                         e.g. "SUPERSEDED", "WITHDRAWN", "DRAFT — NOT VALID"; empty when valid
+     *                         e.g. "SUPERSEDED", "WITHDRAWN", {@link #PREVIEW_WATERMARK}; empty when valid
+     * @param issueDate        empty exactly when the number is (a preview is not issued)
      */
-    public record Identification(String number, int revision, Optional<Replacement> replaces,
-                                 Optional<String> statusWatermark, LocalDate issueDate) {
+    public record Identification(Optional<String> number, int revision, Optional<Replacement> replaces,
+                                 Optional<String> statusWatermark, Optional<LocalDate> issueDate) {
         public Identification {
             Objects.requireNonNull(number, "number");
             if (revision < 0) {
@@ -89,6 +133,22 @@ public record CertificateDocument(
             Objects.requireNonNull(replaces, "replaces");
             Objects.requireNonNull(statusWatermark, "statusWatermark");
             Objects.requireNonNull(issueDate, "issueDate");
+            if (number.isPresent() != issueDate.isPresent()) {
+                throw new IllegalArgumentException("a number and an issue date go together (both absent in a preview)");
+            }
+        }
+
+        /** An issued certificate's identification. */
+        public Identification(String number, int revision, Optional<Replacement> replaces,
+                Optional<String> statusWatermark, LocalDate issueDate) {
+            this(Optional.of(Objects.requireNonNull(number, "number")), revision, replaces, statusWatermark,
+                    Optional.of(Objects.requireNonNull(issueDate, "issueDate")));
+        }
+
+        /** A draft preview's: the revision it would get and what it would replace; marked with the watermark. */
+        public static Identification preview(int revision, Optional<Replacement> replaces) {
+            return new Identification(Optional.empty(), revision, replaces, Optional.of(PREVIEW_WATERMARK),
+                    Optional.empty());
         }
     }
 

@@ -102,8 +102,10 @@ public final class CertificateRenderer {
             configuration.setIccProfilePath(ICC_PROFILE);
             configuration.setTagged(true);
             configuration.setTagLanguage("en");
-            configuration.setMetadataTitle(printable.of(CertificateDocument.DOCUMENT_TYPE + " "
-                    + document.identification().number() + " revision " + document.identification().revision()));
+            configuration.setMetadataTitle(printable.of(document.identification().number()
+                    .map(n -> CertificateDocument.DOCUMENT_TYPE + " " + n + " revision "
+                            + document.identification().revision())
+                    .orElse("Draft preview, not a certificate: " + document.customer().orderReference())));
             configuration.setMetadataAuthor(printable.of(document.laboratory().name()));
             configuration.setMetadataCreator("Specimen Ledger " + printable.of(document.software().version()));
             configuration.setDisplayMetadataTitle(true);
@@ -111,7 +113,7 @@ public final class CertificateRenderer {
             exporter.exportReport();
             return withoutCidSets(pdf.toByteArray());
         } catch (JRException e) {
-            throw new CertificateRenderingFailed(document.identification().number(), e);
+            throw new CertificateRenderingFailed(document.identification().number().orElse("(draft preview)"), e);
         }
     }
 
@@ -121,12 +123,17 @@ public final class CertificateRenderer {
         text(p, "LAB_NAME", d.laboratory().name());
         text(p, "LAB_ADDRESS", d.laboratory().address());
         text(p, "DOCUMENT_TYPE", CertificateDocument.DOCUMENT_TYPE);
-        text(p, "NUMBER", id.number());
+        boolean preview = d.isPreview();
+        p.put("PREVIEW", preview);
+        text(p, "PREVIEW_HEADER", preview ? CertificateDocument.PREVIEW_HEADER : null);
+        text(p, "PREVIEW_FOOTER", preview ? CertificateDocument.PREVIEW_FOOTER : null);
+        // a preview prints what is absent as absent: no number, no date, nothing that reads like one
+        text(p, "NUMBER", id.number().orElse("none until issued"));
         text(p, "REVISION", Integer.toString(id.revision()));
         text(p, "REPLACES", id.replaces().map(r -> "Replaces " + r.number() + " rev " + r.revision()
                 + " because " + r.reason()).orElse(null));
         text(p, "WATERMARK", id.statusWatermark().orElse(null));
-        text(p, "ISSUE_DATE", DATE.format(id.issueDate()));
+        text(p, "ISSUE_DATE", id.issueDate().map(DATE::format).orElse("not issued"));
         text(p, "CUSTOMER_NAME", d.customer().name());
         text(p, "CUSTOMER_ADDRESS", d.customer().address());
         text(p, "ORDER_REFERENCE", d.customer().orderReference());
@@ -144,15 +151,15 @@ public final class CertificateRenderer {
         text(p, "METHOD_VERSION", d.software().analysisMethodVersion());
         text(p, "ITEMS_TESTED", CertificateDocument.ITEMS_TESTED_STATEMENT);
         text(p, "CAUTIONS", CertificateDocument.CAUTIONS);
-        text(p, "SIGNATORY_NAME", d.signatory().name());
-        text(p, "SIGNATORY_FUNCTION", d.signatory().function());
-        text(p, "SIGNED_ON", DATE.format(d.signatory().signedOn()));
+        text(p, "SIGNATORY_NAME", d.signatory().map(CertificateDocument.Signatory::name).orElse(null));
+        text(p, "SIGNATORY_FUNCTION", d.signatory().map(CertificateDocument.Signatory::function).orElse(null));
+        text(p, "SIGNED_ON", d.signatory().map(s -> DATE.format(s.signedOn())).orElse(null));
         text(p, "SIGNATURE_MEANING", CertificateDocument.SIGNATURE_MEANING);
-        text(p, "VERIFICATION_CODE", d.verification().code());
-        text(p, "VERIFY_PATH", d.verification().verifyPath());
-        text(p, "LEDGER_POSITION", "sequence " + d.verification().ledgerSequence() + ", hash "
-                + d.verification().ledgerHash());
-        text(p, "CHECKPOINT", d.verification().checkpoint().orElse(null));
+        text(p, "VERIFICATION_CODE", d.verification().map(CertificateDocument.Verification::code).orElse(null));
+        text(p, "VERIFY_PATH", d.verification().map(CertificateDocument.Verification::verifyPath).orElse(null));
+        text(p, "LEDGER_POSITION", d.verification().map(v -> "sequence " + v.ledgerSequence() + ", hash "
+                + v.ledgerHash()).orElse(null));
+        text(p, "CHECKPOINT", d.verification().flatMap(CertificateDocument.Verification::checkpoint).orElse(null));
 
         p.put("HEATS", rows(d.heats(), h -> new Object[] {"number", h.number(), "producer", h.producer(),
                 "grade", h.grade(), "productForm", h.productForm(), "nominalThickness", h.nominalThickness()}));

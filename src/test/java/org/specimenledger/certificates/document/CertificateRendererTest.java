@@ -1,6 +1,7 @@
 package org.specimenledger.certificates.document;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.time.LocalDate;
 import java.util.List;
@@ -115,7 +116,7 @@ class CertificateRendererTest {
                         Optional.of("SUPERSEDED"), LocalDate.of(2026, 3, 20)),
                 base.customer(), base.product(), base.heats(), base.specimens(), base.conditions(), base.results(),
                 base.decisionRuleStatement(), base.deviationsStatement(), base.equipment(), base.software(),
-                base.signatory(), new CertificateDocument.Verification("7KQ2-M9XD-4TRC", 10544, "ab".repeat(32),
+                base.signatory().orElseThrow(), new CertificateDocument.Verification("7KQ2-M9XD-4TRC", 10544, "ab".repeat(32),
                         Optional.of("Checkpoint 212 signed 2026-03-20T06:00Z")), base.appendix());
         byte[] pdf = renderer.render(revised);
         String text = PdfReadBack.text(pdf);
@@ -137,6 +138,66 @@ class CertificateRendererTest {
                 s -> s.startsWith("88 Imaginary Road") ? longAddress : s);
         String text = PdfReadBack.text(renderer.render(doc));
         assertThat(text.replace(" ", "")).contains(longAddress.replace(" ", ""));
+    }
+
+    /** The same document as a draft preview: no number, issue date, signatory or verification (all absent). */
+    static CertificateDocument preview(CertificateDocument d) {
+        return new CertificateDocument(d.laboratory(), CertificateDocument.Identification.preview(0, Optional.empty()),
+                d.customer(), d.product(), d.heats(), d.specimens(), d.conditions(), d.results(),
+                d.decisionRuleStatement(), d.deviationsStatement(), d.equipment(), d.software(), Optional.empty(),
+                Optional.empty(), d.appendix());
+    }
+
+    @Test
+    void previewIsMarkedOnEveryPageAndPrintsNothingOfAnIssuedCertificatesIdentity() throws Exception {
+        byte[] pdf = renderer.render(preview(twenty));
+        java.nio.file.Files.createDirectories(java.nio.file.Path.of("target", "screenshots"));
+        java.nio.file.Files.write(java.nio.file.Path.of("target", "screenshots", "draft-preview.pdf"), pdf);
+        List<String> pages = PdfReadBack.pageTexts(pdf);
+        assertThat(pages).hasSizeGreaterThan(3);
+        for (int p = 1; p <= pages.size(); p++) {
+            assertThat(pages.get(p - 1)).as("page %d", p).contains(CertificateDocument.PREVIEW_HEADER,
+                    CertificateDocument.PREVIEW_FOOTER + " · page " + p + " of " + pages.size());
+            // the watermark is set rotated: PDFBox reads its letters with spaces between some of them
+            assertThat(pages.get(p - 1).replace(" ", "")).as("page %d", p)
+                    .contains(CertificateDocument.PREVIEW_WATERMARK.replace(" ", ""));
+        }
+        String text = String.join(" ", pages);
+        // the results are the same as the certificate's
+        for (CertificateDocument.ResultRow row : twenty.results()) {
+            assertThat(text).contains(row.reportedValue());
+        }
+        assertThat(text).contains("none until issued", "not issued",
+                "None: a draft preview is not signed", "None: a draft preview has no verification code",
+                "End of draft preview", "The results relate only to the items tested.");
+        assertThat(text).doesNotContain("SL-2026-000417", "2026-03-09", "Dr. Ada Invented", "7KQ2-M9XD-4TRB",
+                "/verify/", "sequence 10482", "Signature:", "Signed on", "End of certificate",
+                "Certificate SL-");
+        assertThat(PdfReadBack.failedRules(pdf, PDFAFlavour.PDFA_2_B)).as("veraPDF, PDF/A-2b").isEmpty();
+    }
+
+    @Test
+    void aCertificateCarriesNoPreviewMarking() {
+        String text = PdfReadBack.text(twentyPdf);
+        assertThat(text).doesNotContain(CertificateDocument.PREVIEW_HEADER, CertificateDocument.PREVIEW_FOOTER);
+        assertThat(text.replace(" ", "")).doesNotContain(CertificateDocument.PREVIEW_WATERMARK.replace(" ", ""));
+    }
+
+    @Test
+    void aDocumentIsEitherACertificateOrAPreviewNeverAMix() {
+        CertificateDocument d = CertificateFixtures.sample(1);
+        assertThatThrownBy(() -> new CertificateDocument(d.laboratory(),
+                CertificateDocument.Identification.preview(0, Optional.empty()), d.customer(), d.product(), d.heats(),
+                d.specimens(), d.conditions(), d.results(), d.decisionRuleStatement(), d.deviationsStatement(),
+                d.equipment(), d.software(), d.signatory(), d.verification(), d.appendix()))
+                .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("preview");
+        assertThatThrownBy(() -> new CertificateDocument(d.laboratory(), d.identification(), d.customer(),
+                d.product(), d.heats(), d.specimens(), d.conditions(), d.results(), d.decisionRuleStatement(),
+                d.deviationsStatement(), d.equipment(), d.software(), Optional.empty(), Optional.empty(),
+                d.appendix()))
+                .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("signatory");
+        assertThatThrownBy(() -> new CertificateDocument.Identification(Optional.of("SL-1"), 0, Optional.empty(),
+                Optional.empty(), Optional.empty())).isInstanceOf(IllegalArgumentException.class);
     }
 
     @Test
