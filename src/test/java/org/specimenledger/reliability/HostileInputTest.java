@@ -35,7 +35,9 @@ import tools.jackson.databind.node.ObjectNode;
  * values; every curve upload gets damaged files and hostile file names. For every answer: no 5xx, every
  * refusal an RFC 9457 problem with type/title/status/detail, no internals in the body, and after a refusal
  * the same row count in every table (so no partial rows and no ledger event). Accepted text must come back
- * as JSON that reads back to the stored value, served with {@code nosniff}.
+ * as JSON that reads back to the stored value, served with {@code nosniff}, and arrive as text (never markup) on
+ * the lab pages that show the record ({@link RenderedText}); {@link HostileTextRenderingTest} follows the same
+ * texts into certificate PDFs, the portal, the trace and the results CSV.
  *
  * <p>Quick mode (part of {@code mvn verify}) takes a seeded sample of the values per field; full mode
  * ({@code -Dreliability.full=true}) sends every value to every field.
@@ -65,7 +67,9 @@ class HostileInputTest extends IntegrationTest {
     private Corpus corpus() {
         if (corpus == null) {
             fixtures = fixtures();
-            corpus = new Corpus(new StoredRows(dataSource));
+            PageVisitor reader = PageVisitor.signedIn("http://127.0.0.1:" + port, TestAccounts.MANAGER,
+                    TestAccounts.PASSWORD);
+            corpus = new Corpus(new StoredRows(dataSource), RenderedText.places(reader));
         }
         return corpus;
     }
@@ -191,7 +195,7 @@ class HostileInputTest extends IntegrationTest {
                     String sent = value instanceof String str ? str : null;
                     byte[] payload = value == REMOVE ? bytes(removed(body, leaf)) : replaced(body, leaf, value);
                     c.probe(key + " " + pointer(leaf) + "=" + describe(value), wire, route.method(), path,
-                            "application/json", payload, sent);
+                            "application/json", payload, sent, key, pointer(leaf));
                 }
             }
         }
@@ -427,7 +431,8 @@ class HostileInputTest extends IntegrationTest {
     }
 
     static String abbreviate(String s) {
-        String visible = s.replaceAll("\\p{Cntrl}", "·");
+        // control characters as a dot, and a lone surrogate by its code (it cannot be written to a UTF-8 report)
+        String visible = s.replaceAll("\\p{Cntrl}", "·").replaceAll("\\p{Cs}", "[surrogate]");
         return visible.length() > 40 ? visible.substring(0, 40) + "…(" + s.length() + ")" : visible;
     }
 
