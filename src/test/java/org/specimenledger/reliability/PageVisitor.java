@@ -37,6 +37,7 @@ final class PageVisitor {
 
     private final String base;
     private final HttpClient http;
+    private final java.util.concurrent.atomic.AtomicInteger reads = new java.util.concurrent.atomic.AtomicInteger();
 
     private PageVisitor(String base) {
         this.base = base;
@@ -62,7 +63,13 @@ final class PageVisitor {
         return v;
     }
 
+    /** How many pages this visitor has read (the sign-in form included). */
+    int reads() {
+        return reads.get();
+    }
+
     Page get(String pathAndQuery) {
+        reads.incrementAndGet();
         HttpResponse<String> r = send(HttpRequest.newBuilder(URI.create(base + pathAndQuery))
                 .timeout(Duration.ofSeconds(60)).GET().build());
         return new Page(pathAndQuery, r.statusCode(), r.headers(), r.body());
