@@ -41,8 +41,8 @@ import org.verapdf.pdfa.flavours.PDFAFlavour;
  *   <li>{@code results.csv} parsed with Commons CSV gives the mark back, with an apostrophe in front when a
  *       spreadsheet would take it for a formula.</li>
  * </ul>
- * Quick mode runs two rotations (every text in at least two fields); full mode ({@code -Dreliability.full=true})
- * runs one per text, so every text goes into every field once.
+ * Quick mode runs two rotations (every text in at least one field, most in two); full mode
+ * ({@code -Dreliability.full=true}) runs one per text, so every text goes into every field once.
  */
 class HostileTextRenderingTest extends IntegrationTest {
 
