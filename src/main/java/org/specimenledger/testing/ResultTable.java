@@ -11,10 +11,13 @@ import java.util.stream.Collectors;
  * quoted with inner quotes doubled), one row per test run. The header names each property with its unit,
  * e.g. {@code Rp0.2 [MPa]}; property cells hold the reported (rounded) value, empty when not determined.
  *
- * <p>The one cell whose text a user typed, the specimen mark, is neutralised against formula injection: a
- * spreadsheet opening the file would run a cell starting with {@code = + - @}, tab or carriage return as a
- * formula, so such a cell gets a leading apostrophe (OWASP's guidance on CSV injection [CP]). The stored
- * mark is unchanged; every other cell is written by the service (identifiers, dates, numbers, codes).
+ * <p>Text cells are neutralised against formula injection: a spreadsheet opening the file runs a cell starting
+ * with {@code = + - @}, tab or carriage return as a formula (OWASP's guidance on CSV injection [CP]), and some
+ * also one starting with a line feed, with those signs after leading spaces, or with their full-width forms
+ * (U+FF1D, U+FF0B, U+FF0D, U+FF20) [CP]. Such a cell gets a leading apostrophe. The specimen mark is typed by a
+ * person; the other text columns are written by the service (identifiers, dates, codes, the software version)
+ * and pass through the same rule, so no column depends on where its text came from. Number cells are left
+ * alone: a negative value is a number, and an apostrophe would turn it into text. The stored data is unchanged.
  */
 final class ResultTable {
 
@@ -36,15 +39,16 @@ final class ResultTable {
         header.add("flags");
         line(out, header);
         for (ResultRow r : rows) {
-            List<String> cells = new ArrayList<>(List.of(typedText(r.labIdentifier()), r.testRunId().toString(),
+            List<String> cells = new ArrayList<>(List.of(r.labIdentifier(), r.testRunId().toString(),
                     r.testDate().toString(), r.standard().name(), r.mode().name(), r.validity().name(),
                     r.analysisId().toString(), r.softwareVersion(), r.methodVersion(), r.inputSha256()));
+            cells.replaceAll(ResultTable::typedText);
             for (String symbol : units.keySet()) {
                 ResultRow.Value v = r.properties().get(symbol);
                 cells.add(v == null || v.reported() == null ? "" : v.reported());
             }
             cells.add(r.cycles() == null ? "" : r.cycles().toString());
-            cells.add(r.flags().stream().map(ResultFlag::code).distinct().collect(Collectors.joining(" ")));
+            cells.add(typedText(r.flags().stream().map(ResultFlag::code).distinct().collect(Collectors.joining(" "))));
             line(out, cells);
         }
         return out.toString();
@@ -60,13 +64,23 @@ final class ResultTable {
         out.append("\r\n");
     }
 
-    /** A user's text as a cell that no spreadsheet evaluates. */
+    /** A text as a cell that no spreadsheet evaluates. */
     static String typedText(String s) {
         if (s == null || s.isEmpty()) {
             return s;
         }
-        char c = s.charAt(0);
-        return c == '=' || c == '+' || c == '-' || c == '@' || c == '\t' || c == '\r' ? "'" + s : s;
+        char first = s.charAt(0);
+        if (first == '\t' || first == '\r' || first == '\n') {
+            return "'" + s;
+        }
+        String rest = s.stripLeading();
+        if (rest.isEmpty()) {
+            return s;
+        }
+        int c = rest.codePointAt(0);
+        boolean formula = c == '=' || c == '+' || c == '-' || c == '@' || c == 0xFF1D || c == 0xFF0B || c == 0xFF0D
+                || c == 0xFF20;
+        return formula ? "'" + s : s;
     }
 
     static String field(String s) {

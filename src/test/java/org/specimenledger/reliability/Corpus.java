@@ -12,6 +12,7 @@ import tools.jackson.databind.JsonNode;
 final class Corpus {
 
     private final StoredRows rows;
+    private final List<RenderedText> places;
     private final List<String> findings = new ArrayList<>();
     private Map<String, Long> counts;
     private int sent;
@@ -19,8 +20,9 @@ final class Corpus {
     private int accepted;
     private int echoed;
 
-    Corpus(StoredRows rows) {
+    Corpus(StoredRows rows, List<RenderedText> places) {
         this.rows = rows;
+        this.places = places;
         this.counts = rows.count();
     }
 
@@ -35,6 +37,12 @@ final class Corpus {
 
     Wire.Answer probe(String label, Wire wire, String method, String path, String contentType, byte[] body,
             String sentText) {
+        return probe(label, wire, method, path, contentType, body, sentText, null, null);
+    }
+
+    /** The same, naming the endpoint and the field that carries {@code sentText}, for the pages that print it. */
+    Wire.Answer probe(String label, Wire wire, String method, String path, String contentType, byte[] body,
+            String sentText, String endpoint, String pointer) {
         Wire.Answer a;
         try {
             a = wire.send(method, path, contentType, body);
@@ -57,8 +65,9 @@ final class Corpus {
         } else {
             accepted++;
             if (sentText != null) {
-                for (RenderedText place : RenderedText.PLACES) {
-                    String problem = place.check(sentText, a);
+                RenderedText.Accepted accepted = new RenderedText.Accepted(endpoint, pointer, sentText, a);
+                for (RenderedText place : places) {
+                    String problem = place.check(accepted);
                     if (problem != null) {
                         findings.add(label + ": accepted text " + place.name() + ": " + problem);
                     }
@@ -66,6 +75,8 @@ final class Corpus {
                 if (containsString(a.json(), sentText)) {
                     echoed++;
                 }
+                // reading pages stores nothing, but count again so that no later refusal is blamed for it
+                after = rows.count();
             }
         }
         counts = after;

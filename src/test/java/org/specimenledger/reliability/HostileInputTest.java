@@ -35,7 +35,9 @@ import tools.jackson.databind.node.ObjectNode;
  * values; every curve upload gets damaged files and hostile file names. For every answer: no 5xx, every
  * refusal an RFC 9457 problem with type/title/status/detail, no internals in the body, and after a refusal
  * the same row count in every table (so no partial rows and no ledger event). Accepted text must come back
- * as JSON that reads back to the stored value, served with {@code nosniff}.
+ * as JSON that reads back to the stored value, served with {@code nosniff}, and arrive as text (never markup) on
+ * the lab pages that show the record ({@link RenderedText}); {@link HostileTextRenderingTest} follows the same
+ * texts into certificate PDFs, the portal, the trace and the results CSV.
  *
  * <p>Quick mode (part of {@code mvn verify}) takes a seeded sample of the values per field; full mode
  * ({@code -Dreliability.full=true}) sends every value to every field.
@@ -54,6 +56,7 @@ class HostileInputTest extends IntegrationTest {
     DataSource dataSource;
 
     private Corpus corpus;
+    private PageVisitor reader;
 
     /** Records made for the corpus alone, so that what it changes or retires is nobody else's. */
     private record Fixtures(String customerId, String orderId, String heatId, String specimenId, String machineId,
@@ -65,7 +68,9 @@ class HostileInputTest extends IntegrationTest {
     private Corpus corpus() {
         if (corpus == null) {
             fixtures = fixtures();
-            corpus = new Corpus(new StoredRows(dataSource));
+            reader = PageVisitor.signedIn("http://127.0.0.1:" + port, TestAccounts.MANAGER,
+                    TestAccounts.PASSWORD);
+            corpus = new Corpus(new StoredRows(dataSource), RenderedText.places(reader));
         }
         return corpus;
     }
@@ -191,11 +196,12 @@ class HostileInputTest extends IntegrationTest {
                     String sent = value instanceof String str ? str : null;
                     byte[] payload = value == REMOVE ? bytes(removed(body, leaf)) : replaced(body, leaf, value);
                     c.probe(key + " " + pointer(leaf) + "=" + describe(value), wire, route.method(), path,
-                            "application/json", payload, sent);
+                            "application/json", payload, sent, key, pointer(leaf));
                 }
             }
         }
         c.report("JSON bodies", endpoints);
+        System.out.printf("[reliability] pages read back for accepted text: %d%n", reader.reads() - 1);
         assertThat(endpoints).as("endpoints with a JSON body found in the route table").isGreaterThan(15);
         assertThat(c.findings()).as("hostile JSON bodies answered wrongly").isEmpty();
     }
@@ -395,11 +401,13 @@ class HostileInputTest extends IntegrationTest {
         } else if (parent instanceof ArrayNode a) {
             a.set((Integer) last, node);
         }
-        String text = Wire.JSON.writeValueAsString(body);
-        if (value instanceof HostileValues.Raw raw) {
-            text = text.replace("\"" + marker + "\"", raw.token());
+        if (!(value instanceof HostileValues.Raw raw)) {
+            // written by the JSON library as bytes: a lone surrogate goes out as a JSON escape, as a client would
+            // send it; through a Java String and getBytes it would silently become '?'
+            return Wire.JSON.writeValueAsBytes(body);
         }
-        return text.getBytes(StandardCharsets.UTF_8);
+        String text = Wire.JSON.writeValueAsString(body);
+        return text.replace("\"" + marker + "\"", raw.token()).getBytes(StandardCharsets.UTF_8);
     }
 
     private static JsonNode withExtra(JsonNode body) {
@@ -427,7 +435,8 @@ class HostileInputTest extends IntegrationTest {
     }
 
     static String abbreviate(String s) {
-        String visible = s.replaceAll("\\p{Cntrl}", "·");
+        // control characters as a dot, and a lone surrogate by its code (it cannot be written to a UTF-8 report)
+        String visible = s.replaceAll("\\p{Cntrl}", "·").replaceAll("\\p{Cs}", "[surrogate]");
         return visible.length() > 40 ? visible.substring(0, 40) + "…(" + s.length() + ")" : visible;
     }
 

@@ -6,7 +6,7 @@ import java.util.List;
  * The hostile and malformed values the corpus puts into every field, parameter and body. Each entry says
  * what it tries; none of them is a measurement. Raw JSON tokens (not strings) are marked {@link Raw}.
  */
-final class HostileValues {
+public final class HostileValues {
 
     private HostileValues() {
     }
@@ -16,7 +16,7 @@ final class HostileValues {
     }
 
     /** Text a person could type into a name, number or remark: stored if the field allows it, never run. */
-    static final List<String> TEXT = List.of(
+    public static final List<String> TEXT = List.of(
             "'; DROP TABLE heat; --",
             "\" OR \"1\"=\"1",
             "1' OR '1'='1' /*",
@@ -24,6 +24,10 @@ final class HostileValues {
             "\"><img src=x onerror=alert(1)>",
             "{{7*7}}${7*7}#{7*7}",
             "${jndi:ldap://127.0.0.1/x}",
+            "=HYPERLINK(\"http://127.0.0.1/x\",\"open\")",
+            "@SUM(1+1)*cmd|' /C calc'!A0",
+            "-2+3",
+            "javascript:alert(1)",
             "../../../../etc/passwd",
             "nul\u0000byte",
             "bell\u0007esc\u001b[31mred",

@@ -22,14 +22,17 @@ final class PrintableText {
             return null;
         }
         StringBuilder out = new StringBuilder(text.length());
-        text.codePoints().forEach(cp -> {
-            if (cp == '\n') {
+        int[] codePoints = text.codePoints().toArray();
+        for (int i = 0; i < codePoints.length; i++) {
+            int cp = codePoints[i];
+            if (cp == '\r') {
+                // CR LF and a lone CR both become one line break (the LF of a CR LF is skipped here)
                 out.append('\n');
-            } else if (cp == '\r') {
-                // CR LF and lone CR both become one line break
-                if (out.length() == 0 || out.charAt(out.length() - 1) != '\n') {
-                    out.append('\n');
+                if (i + 1 < codePoints.length && codePoints[i + 1] == '\n') {
+                    i++;
                 }
+            } else if (cp == '\n') {
+                out.append('\n');
             } else if (cp == '\t') {
                 out.append(' ');
             } else if (Character.isISOControl(cp) || !font.canDisplay(cp) || Character.getType(cp) == Character.FORMAT) {
@@ -37,7 +40,7 @@ final class PrintableText {
             } else {
                 out.appendCodePoint(cp);
             }
-        });
+        }
         return out.toString();
     }
 }
