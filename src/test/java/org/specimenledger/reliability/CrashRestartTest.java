@@ -53,11 +53,14 @@ class CrashRestartTest {
                 m.start();
                 workers.add(m);
                 if (kill % 4 == 1) {
-                    // one kill in four waits for an issue to be acknowledged first, so that issued certificates
-                    // (not only interrupted issues) must survive the restarts and their numbers stay contiguous
+                    // one kill in four waits for an issue and an upload to be acknowledged first, so that issued
+                    // certificates and stored curves (not only interrupted requests) must survive the restarts, on
+                    // a slow machine too, and the certificate numbers must stay contiguous
                     long before = work.issues.get();
+                    long uploadsBefore = work.uploads.get();
                     long giveUp = System.nanoTime() + Duration.ofSeconds(90).toNanos();
-                    while (work.issues.get() == before && System.nanoTime() < giveUp) {
+                    while ((work.issues.get() == before || work.uploads.get() == uploadsBefore)
+                            && System.nanoTime() < giveUp) {
                         Thread.sleep(50);
                     }
                     Thread.sleep(random.nextInt(3000));
