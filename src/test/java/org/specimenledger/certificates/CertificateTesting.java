@@ -44,6 +44,18 @@ abstract class CertificateTesting extends IntegrationTest {
                 CertificateBench.requirement("Rm", "380", "500", "MPa"));
     }
 
+    /**
+     * Every line's specimen, property and reported value stand in one row of the printed results. Long identifiers
+     * wrap inside their table cell, so the row is compared without white space.
+     */
+    protected static void assertEveryLinePrinted(String pdfText, JsonNode lines) {
+        String compact = pdfText.replace(" ", "");
+        for (JsonNode line : lines) {
+            assertThat(compact).as("line %s", line).contains(line.get("specimenLabel").asString()
+                    + line.get("property").asString() + line.get("reported").asString() + "MPa");
+        }
+    }
+
     protected JsonNode draft(CertificateBench.Order order, List<String> specimens, String rule, boolean curves) {
         Api.Response r = manager().post("/api/v1/certificates/drafts",
                 CertificateBench.draft(order, specimens, rule, curves));
