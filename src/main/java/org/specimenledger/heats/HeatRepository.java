@@ -11,5 +11,8 @@ interface HeatRepository extends JpaRepository<Heat, UUID>, JpaSpecificationExec
 
     List<Heat> findAllByHeatNumberIgnoreCaseOrderByProducerAsc(String heatNumber);
 
+    /** A customer's heats: one query whose plan Hibernate keeps, unlike a criteria query built per call. */
+    List<Heat> findAllByIdInOrderByProducerAscHeatNumberAsc(java.util.Collection<UUID> ids);
+
     boolean existsByProducerIgnoreCaseAndHeatNumberIgnoreCaseAndIdNot(String producer, String heatNumber, UUID id);
 }

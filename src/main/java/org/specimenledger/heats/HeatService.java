@@ -84,6 +84,11 @@ public class HeatService {
         if (visible != null && visible.isEmpty()) {
             return List.of();
         }
+        boolean unfiltered = (producer == null || producer.isBlank()) && (heatNumber == null || heatNumber.isBlank());
+        if (visible != null && unfiltered) {
+            // the portal's everyday list
+            return heats.findAllByIdInOrderByProducerAscHeatNumberAsc(visible).stream().map(HeatView::of).toList();
+        }
         Specification<Heat> filter = (root, query, cb) -> {
             List<Predicate> where = new ArrayList<>();
             if (producer != null && !producer.isBlank()) {
