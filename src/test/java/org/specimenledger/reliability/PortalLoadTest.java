@@ -46,6 +46,14 @@ class PortalLoadTest {
 
     private static final int USERS = Integer.getInteger("reliability.portal-users", HostileInputTest.FULL ? 50 : 10);
     private static final int SECONDS = Integer.getInteger("reliability.load-seconds", HostileInputTest.FULL ? 300 : 10);
+    /**
+     * The same load, unmeasured, before the measured window, its rate raised step by step from a fifth to the full
+     * rate over the first three quarters: the service's JIT compiler needs a few minutes of traffic on two cores
+     * before the code is at full speed (CPU per request falls about fourfold over the first two or three minutes), and
+     * starved of CPU by a full-rate start it takes far longer. A laboratory's service runs for weeks; a cold start
+     * is not its working state. The warm-up's figures are printed as well.
+     */
+    private static final int WARM_UP = Integer.getInteger("reliability.load-warmup-seconds", HostileInputTest.FULL ? 180 : 0);
     private static final double RATE = Double.parseDouble(System.getProperty("reliability.portal-rate",
             HostileInputTest.FULL ? "250" : "50"));
 
@@ -93,12 +101,19 @@ class PortalLoadTest {
             }
             threads.add(new Thread(() -> work.manager(service.port(), stop), "manager"));
             Recorder latencies = new Recorder(3);
+            List<Recorder> byKind = new ArrayList<>();
+            for (int k = 0; k < PortalUser.KINDS.size(); k++) {
+                byKind.add(new Recorder(3));
+            }
             AtomicLong errors = new AtomicLong();
             AtomicLong pdfBytes = new AtomicLong();
             List<String> errorSamples = new java.util.concurrent.CopyOnWriteArrayList<>();
             AtomicBoolean measuring = new AtomicBoolean();
+            java.util.concurrent.atomic.AtomicInteger schedule = new java.util.concurrent.atomic.AtomicInteger();
             java.util.concurrent.CountDownLatch signedIn = new java.util.concurrent.CountDownLatch(USERS);
             long periodNanos = RATE <= 0 ? 0 : (long) (1e9 * USERS / RATE);
+            // each user's current period: longer than periodNanos while the warm-up ramps the rate up
+            AtomicLong period = new AtomicLong(WARM_UP > 0 ? periodNanos * 5 : periodNanos);
             for (int i = 0; i < USERS; i++) {
                 Wire portal = new Wire(service.base(), users.get(i), "portal-password-" + i);
                 threads.add(new Thread(() -> {
@@ -107,21 +122,41 @@ class PortalLoadTest {
                         Thread.onSpinWait();
                     }
                     signedIn.countDown();
-                    new PortalUser(portal, organisation, numbers, periodNanos, stop, measuring, latencies, errors,
-                            pdfBytes, errorSamples).run();
+                    new PortalUser(portal, organisation, numbers, period, stop, measuring, schedule, latencies,
+                            byKind, errors, pdfBytes, errorSamples).run();
                 }, "portal-" + i));
             }
             threads.forEach(Thread::start);
             assertThat(signedIn.await(5, java.util.concurrent.TimeUnit.MINUTES)).as("every portal user signed in").isTrue();
-            Thread.sleep(3000); // JIT and pool settle
+            Thread.sleep(3000); // pool settles
+            Histogram cold = null;
+            if (WARM_UP > 0) {
+                latencies.reset();
+                measuring.set(true);
+                long rampEnd = System.nanoTime() + WARM_UP * 750_000_000L;
+                long warmEnd = System.nanoTime() + WARM_UP * 1_000_000_000L;
+                while (System.nanoTime() < warmEnd) {
+                    double left = Math.max(0, (rampEnd - System.nanoTime()) / (WARM_UP * 750_000_000.0));
+                    period.set((long) (periodNanos / (1.0 - 0.8 * left))); // a fifth of the rate at first, then all
+                    Thread.sleep(1000);
+                }
+                period.set(periodNanos);
+                measuring.set(false);
+                cold = latencies.getIntervalHistogram();
+                schedule.incrementAndGet(); // each user starts its schedule anew: no backlog carried into the window
+                pdfBytes.set(0);
+            }
             latencies.reset();
+            byKind.forEach(Recorder::reset);
             long startUploads = work.uploads.get();
             long startIssues = work.issues.get();
+            Duration cpuBefore = service.cpuTime();
             measuring.set(true);
             Instant start = Instant.now();
             Thread.sleep(SECONDS * 1000L);
             measuring.set(false);
             Duration took = Duration.between(start, Instant.now());
+            Duration cpu = service.cpuTime().minus(cpuBefore);
             Histogram h = latencies.getIntervalHistogram();
             long uploads = work.uploads.get() - startUploads;
             long issues = work.issues.get() - startIssues;
@@ -131,13 +166,29 @@ class PortalLoadTest {
             }
             var chain = ChainVerifier.over(db.dataSource()).verify();
             double seconds = took.toMillis() / 1000.0;
+            if (cold != null) {
+                System.out.printf(java.util.Locale.ROOT, "[reliability] load warm-up (unmeasured window, %d s from a "
+                        + "cold start): %d requests, p50 %.1f ms, p99 %.1f ms, max %.1f ms%n", WARM_UP,
+                        cold.getTotalCount(), cold.getValueAtPercentile(50) / 1000.0,
+                        cold.getValueAtPercentile(99) / 1000.0, cold.getMaxValue() / 1000.0);
+            }
             System.out.printf(java.util.Locale.ROOT, "[reliability] load: %d portal users, %s, for %.1f s: %d portal "
                     + "requests answered (%.1f/s), p50 %.1f ms, p99 %.1f ms, max %.1f ms (from the scheduled send), %d "
-                    + "errors, %.1f MB of PDF downloaded; %d uploads (%.2f/s) and %d certificate issues alongside; "
+                    + "errors (warm-up included), %.1f MB of PDF downloaded; %d uploads (%.2f/s) and %d certificate issues alongside; "
                     + "ledger %s (%d events)%n", USERS, RATE <= 0 ? "closed loop" : "scheduled at " + RATE + " requests/s",
                     seconds, h.getTotalCount(), h.getTotalCount() / seconds, h.getValueAtPercentile(50) / 1000.0,
                     h.getValueAtPercentile(99) / 1000.0, h.getMaxValue() / 1000.0, errors.get(), pdfBytes.get() / 1e6,
                     uploads, uploads / seconds, issues, chain.valid() ? "valid" : "BROKEN", chain.eventsChecked());
+            System.out.printf(java.util.Locale.ROOT, "[reliability] load: the service used %.1f s of CPU in the window "
+                    + "(%.2f of the 2 cores' %.0f s)%n", cpu.toMillis() / 1000.0, cpu.toMillis() / 1000.0 / seconds,
+                    2 * seconds);
+            for (int k = 0; k < PortalUser.KINDS.size(); k++) {
+                Histogram kind = byKind.get(k).getIntervalHistogram();
+                System.out.printf(java.util.Locale.ROOT, "[reliability] load, %s: %d requests, p50 %.1f ms, p99 %.1f ms, "
+                        + "max %.1f ms%n", PortalUser.KINDS.get(k), kind.getTotalCount(),
+                        kind.getValueAtPercentile(50) / 1000.0, kind.getValueAtPercentile(99) / 1000.0,
+                        kind.getMaxValue() / 1000.0);
+            }
             assertThat(errors.get()).as("portal errors, e.g. " + errorSamples).isZero();
             assertThat(work.serverErrors).as("upload and issue errors").isEmpty();
             assertThat(chain.valid()).as("ledger after the load").isTrue();
@@ -155,15 +206,26 @@ class PortalLoadTest {
      * PDF, the orders, the heats. With a period, each request has its scheduled moment and its latency is counted
      * from there.
      */
-    private record PortalUser(Wire portal, String organisation, List<String> numbers, long periodNanos,
-            AtomicBoolean stop, AtomicBoolean measuring, Recorder latencies, AtomicLong errors, AtomicLong pdfBytes,
+    private record PortalUser(Wire portal, String organisation, List<String> numbers, AtomicLong period,
+            AtomicBoolean stop, AtomicBoolean measuring, java.util.concurrent.atomic.AtomicInteger schedule,
+            Recorder latencies, List<Recorder> byKind, AtomicLong errors, AtomicLong pdfBytes,
             List<String> samples) {
+
+        static final List<String> KINDS = List.of("certificate list", "search by number", "one certificate",
+                "certificate PDF", "orders", "heats");
 
         void run() {
             ThreadLocalRandom random = ThreadLocalRandom.current();
+            long periodNanos = period.get();
             long next = System.nanoTime() + (periodNanos == 0 ? 0 : random.nextLong(periodNanos));
             int step = random.nextInt(6);
+            int round = schedule.get();
             while (!stop.get()) {
+                if (round != schedule.get()) {
+                    round = schedule.get();
+                    periodNanos = period.get();
+                    next = System.nanoTime() + (periodNanos == 0 ? 0 : random.nextLong(periodNanos));
+                }
                 if (periodNanos > 0) {
                     long wait = next - System.nanoTime();
                     if (wait > 0) {
@@ -173,7 +235,8 @@ class PortalLoadTest {
                 }
                 long scheduled = periodNanos == 0 ? System.nanoTime() : next;
                 String number = numbers.get(random.nextInt(numbers.size()));
-                String path = switch (step++ % 6) {
+                int kind = step++ % 6;
+                String path = switch (kind) {
                     case 0 -> "/api/v1/certificates?size=20";
                     case 1 -> "/api/v1/certificates?number=" + number.substring(0, number.length() - 2);
                     case 2 -> "/api/v1/certificates/" + number;
@@ -201,17 +264,18 @@ class PortalLoadTest {
                         errors.incrementAndGet();
                         samples.add(e.getMessage());
                     }
-                    next += periodNanos;
+                    next += period.get();
                     continue;
                 }
                 long micros = (System.nanoTime() - scheduled) / 1000;
                 if (measuring.get()) {
                     latencies.recordValue(micros);
+                    byKind.get(kind).recordValue(micros);
                     if (status != 200) {
                         errors.incrementAndGet();
                     }
                 }
-                next += periodNanos;
+                next += period.get();
             }
         }
     }

@@ -116,6 +116,11 @@ final class ServiceProcess implements AutoCloseable {
         throw new IllegalStateException("the service did not become healthy within " + patience + "; see " + log);
     }
 
+    /** CPU time the service process has used so far (all its threads), as the operating system counts it. */
+    Duration cpuTime() {
+        return process.toHandle().info().totalCpuDuration().orElse(Duration.ZERO);
+    }
+
     String base() {
         return "http://127.0.0.1:" + port;
     }

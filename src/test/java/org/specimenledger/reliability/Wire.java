@@ -16,7 +16,9 @@ import tools.jackson.databind.json.JsonMapper;
 final class Wire {
 
     static final JsonMapper JSON = JsonMapper.builder().build();
-    private static final HttpClient HTTP = HttpClient.newBuilder().connectTimeout(Duration.ofSeconds(10)).build();
+    // HTTP/1.1 as the service speaks it: the client's default would offer an h2c upgrade on every new connection
+    private static final HttpClient HTTP = HttpClient.newBuilder().version(HttpClient.Version.HTTP_1_1)
+            .connectTimeout(Duration.ofSeconds(10)).build();
 
     private final String base;
     private final String authorization;
