@@ -100,7 +100,6 @@ class PortalLoadTest {
                 threads.add(new Thread(() -> work.technician(service.port(), stop), "technician-" + w));
             }
             threads.add(new Thread(() -> work.manager(service.port(), stop), "manager"));
-            Recorder latencies = new Recorder(3);
             List<Recorder> byKind = new ArrayList<>();
             for (int k = 0; k < PortalUser.KINDS.size(); k++) {
                 byKind.add(new Recorder(3));
@@ -122,7 +121,7 @@ class PortalLoadTest {
                         Thread.onSpinWait();
                     }
                     signedIn.countDown();
-                    new PortalUser(portal, organisation, numbers, period, stop, measuring, schedule, latencies,
+                    new PortalUser(portal, organisation, numbers, period, stop, measuring, schedule,
                             byKind, errors, pdfBytes, errorSamples).run();
                 }, "portal-" + i));
             }
@@ -131,7 +130,7 @@ class PortalLoadTest {
             Thread.sleep(3000); // pool settles
             Histogram cold = null;
             if (WARM_UP > 0) {
-                latencies.reset();
+                byKind.forEach(Recorder::reset);
                 measuring.set(true);
                 long rampEnd = System.nanoTime() + WARM_UP * 750_000_000L;
                 long warmEnd = System.nanoTime() + WARM_UP * 1_000_000_000L;
@@ -142,11 +141,10 @@ class PortalLoadTest {
                 }
                 period.set(periodNanos);
                 measuring.set(false);
-                cold = latencies.getIntervalHistogram();
+                cold = merged(byKind.stream().map(Recorder::getIntervalHistogram).toList());
                 schedule.incrementAndGet(); // each user starts its schedule anew: no backlog carried into the window
                 pdfBytes.set(0);
             }
-            latencies.reset();
             byKind.forEach(Recorder::reset);
             long startUploads = work.uploads.get();
             long startIssues = work.issues.get();
@@ -157,7 +155,8 @@ class PortalLoadTest {
             measuring.set(false);
             Duration took = Duration.between(start, Instant.now());
             Duration cpu = service.cpuTime().minus(cpuBefore);
-            Histogram h = latencies.getIntervalHistogram();
+            List<Histogram> kinds = byKind.stream().map(Recorder::getIntervalHistogram).toList();
+            Histogram h = merged(kinds);
             long uploads = work.uploads.get() - startUploads;
             long issues = work.issues.get() - startIssues;
             stop.set(true);
@@ -168,9 +167,7 @@ class PortalLoadTest {
             double seconds = took.toMillis() / 1000.0;
             if (cold != null) {
                 System.out.printf(java.util.Locale.ROOT, "[reliability] load warm-up (unmeasured window, %d s from a "
-                        + "cold start): %d requests, p50 %.1f ms, p99 %.1f ms, max %.1f ms%n", WARM_UP,
-                        cold.getTotalCount(), cold.getValueAtPercentile(50) / 1000.0,
-                        cold.getValueAtPercentile(99) / 1000.0, cold.getMaxValue() / 1000.0);
+                        + "cold start): %s%n", WARM_UP, percentiles(cold));
             }
             System.out.printf(java.util.Locale.ROOT, "[reliability] load: %d portal users, %s, for %.1f s: %d portal "
                     + "requests answered (%.1f/s), p50 %.1f ms, p99 %.1f ms, max %.1f ms (from the scheduled send), %d "
@@ -179,15 +176,13 @@ class PortalLoadTest {
                     seconds, h.getTotalCount(), h.getTotalCount() / seconds, h.getValueAtPercentile(50) / 1000.0,
                     h.getValueAtPercentile(99) / 1000.0, h.getMaxValue() / 1000.0, errors.get(), pdfBytes.get() / 1e6,
                     uploads, uploads / seconds, issues, chain.valid() ? "valid" : "BROKEN", chain.eventsChecked());
+            int cores = Runtime.getRuntime().availableProcessors();
             System.out.printf(java.util.Locale.ROOT, "[reliability] load: the service used %.1f s of CPU in the window "
-                    + "(%.2f of the 2 cores' %.0f s)%n", cpu.toMillis() / 1000.0, cpu.toMillis() / 1000.0 / seconds,
-                    2 * seconds);
+                    + "(%.2f of the %d cores' %.0f s)%n", cpu.toMillis() / 1000.0, cpu.toMillis() / 1000.0 / seconds,
+                    cores, cores * seconds);
             for (int k = 0; k < PortalUser.KINDS.size(); k++) {
-                Histogram kind = byKind.get(k).getIntervalHistogram();
-                System.out.printf(java.util.Locale.ROOT, "[reliability] load, %s: %d requests, p50 %.1f ms, p99 %.1f ms, "
-                        + "max %.1f ms%n", PortalUser.KINDS.get(k), kind.getTotalCount(),
-                        kind.getValueAtPercentile(50) / 1000.0, kind.getValueAtPercentile(99) / 1000.0,
-                        kind.getMaxValue() / 1000.0);
+                System.out.printf(java.util.Locale.ROOT, "[reliability] load, %s: %s%n", PortalUser.KINDS.get(k),
+                        percentiles(kinds.get(k)));
             }
             assertThat(errors.get()).as("portal errors, e.g. " + errorSamples).isZero();
             assertThat(work.serverErrors).as("upload and issue errors").isEmpty();
@@ -201,6 +196,19 @@ class PortalLoadTest {
         }
     }
 
+    /** All request kinds in one histogram. */
+    private static Histogram merged(List<Histogram> kinds) {
+        Histogram all = new Histogram(3);
+        kinds.forEach(all::add);
+        return all;
+    }
+
+    private static String percentiles(Histogram h) {
+        return String.format(java.util.Locale.ROOT, "%d requests, p50 %.1f ms, p99 %.1f ms, max %.1f ms",
+                h.getTotalCount(), h.getValueAtPercentile(50) / 1000.0, h.getValueAtPercentile(99) / 1000.0,
+                h.getMaxValue() / 1000.0);
+    }
+
     /**
      * One customer at the portal, in a fixed round: the certificate list, a search by number, one certificate, its
      * PDF, the orders, the heats. With a period, each request has its scheduled moment and its latency is counted
@@ -208,7 +216,7 @@ class PortalLoadTest {
      */
     private record PortalUser(Wire portal, String organisation, List<String> numbers, AtomicLong period,
             AtomicBoolean stop, AtomicBoolean measuring, java.util.concurrent.atomic.AtomicInteger schedule,
-            Recorder latencies, List<Recorder> byKind, AtomicLong errors, AtomicLong pdfBytes,
+            List<Recorder> byKind, AtomicLong errors, AtomicLong pdfBytes,
             List<String> samples) {
 
         static final List<String> KINDS = List.of("certificate list", "search by number", "one certificate",
@@ -218,7 +226,7 @@ class PortalLoadTest {
             ThreadLocalRandom random = ThreadLocalRandom.current();
             long periodNanos = period.get();
             long next = System.nanoTime() + (periodNanos == 0 ? 0 : random.nextLong(periodNanos));
-            int step = random.nextInt(6);
+            int step = random.nextInt(KINDS.size());
             int round = schedule.get();
             while (!stop.get()) {
                 if (round != schedule.get()) {
@@ -235,7 +243,7 @@ class PortalLoadTest {
                 }
                 long scheduled = periodNanos == 0 ? System.nanoTime() : next;
                 String number = numbers.get(random.nextInt(numbers.size()));
-                int kind = step++ % 6;
+                int kind = step++ % KINDS.size();
                 String path = switch (kind) {
                     case 0 -> "/api/v1/certificates?size=20";
                     case 1 -> "/api/v1/certificates?number=" + number.substring(0, number.length() - 2);
@@ -269,7 +277,6 @@ class PortalLoadTest {
                 }
                 long micros = (System.nanoTime() - scheduled) / 1000;
                 if (measuring.get()) {
-                    latencies.recordValue(micros);
                     byKind.get(kind).recordValue(micros);
                     if (status != 200) {
                         errors.incrementAndGet();
