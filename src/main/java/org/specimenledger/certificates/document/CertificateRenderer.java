@@ -24,6 +24,7 @@ import net.sf.jasperreports.export.SimpleExporterInput;
 import net.sf.jasperreports.export.SimpleOutputStreamExporterOutput;
 import net.sf.jasperreports.pdf.JRPdfExporter;
 import net.sf.jasperreports.pdf.SimplePdfExporterConfiguration;
+import net.sf.jasperreports.pdf.SimplePdfReportConfiguration;
 import net.sf.jasperreports.pdf.type.PdfaConformanceEnum;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.cos.COSName;
@@ -110,11 +111,25 @@ public final class CertificateRenderer {
             configuration.setMetadataCreator("Specimen Ledger " + printable.of(document.software().version()));
             configuration.setDisplayMetadataTitle(true);
             exporter.setConfiguration(configuration);
+            exporter.setConfiguration(sameLineBreaksAsTheFill());
             exporter.exportReport();
             return withoutCidSets(pdf.toByteArray());
         } catch (JRException e) {
             throw new CertificateRenderingFailed(document.identification().number().orElse("(draft preview)"), e);
         }
+    }
+
+    /**
+     * The fill measures each text field with AWT's line breaking and sizes the cell to that many lines; the PDF
+     * library then breaks the text again by its own rules, which split at fewer places (text such as
+     * {@code "><img src=x} has break points AWT takes and the PDF library does not). The PDF needed one line more than
+     * the cell had, and the cell's last line was cut off. Forcing the fill's break policy on the export keeps every
+     * line the fill counted.
+     */
+    private static SimplePdfReportConfiguration sameLineBreaksAsTheFill() {
+        SimplePdfReportConfiguration report = new SimplePdfReportConfiguration();
+        report.setForceLineBreakPolicy(true);
+        return report;
     }
 
     private Map<String, Object> parameters(CertificateDocument d) {

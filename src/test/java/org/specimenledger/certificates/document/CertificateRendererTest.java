@@ -212,6 +212,41 @@ class CertificateRendererTest {
         assertThat(PdfReadBack.failedRules(pdf, PDFAFlavour.PDFA_2_B)).isEmpty();
     }
 
+    /**
+     * Every free text, with a markup-like text after it and a unique end mark, prints to its last word. The fill
+     * breaks lines where AWT allows (before "(", after "<"...), the PDF library by default only at spaces and
+     * hyphens; a narrow cell sized for the fill's line count lost its last line in the PDF (found by the reliability
+     * suite with an equipment identifier, rerun here for every table cell and block of text).
+     */
+    @Test
+    void aTextThatBreaksAtPunctuationKeepsItsLastLine() {
+        String markupLike = "\"><img src=x onerror=alert(1)>";
+        List<String> ends = new java.util.ArrayList<>();
+        CertificateDocument d = CertificateFixtures.sample(3, false, s -> {
+            String end = "~end" + ends.size();
+            ends.add(end);
+            return s + " " + markupLike + " " + end;
+        });
+        List<CertificateDocument.Equipment> equipment = new java.util.ArrayList<>();
+        for (String field : List.of("identifier", "kind", "reference", "class")) {
+            String v = "TM-ab12c " + markupLike + " ~" + field;
+            ends.add("~" + field);
+            equipment.add(new CertificateDocument.Equipment(field.equals("identifier") ? v : "TM-01",
+                    field.equals("kind") ? v : "testing machine", field.equals("reference") ? v : "CAL-1",
+                    LocalDate.of(2026, 1, 5), LocalDate.of(2027, 1, 5), field.equals("class") ? v : "class 1"));
+        }
+        CertificateDocument doc = new CertificateDocument(d.laboratory(), d.identification(), d.customer(),
+                d.product(), d.heats(), d.specimens(), d.conditions(), d.results(), d.decisionRuleStatement(),
+                d.deviationsStatement(), equipment, d.software(), d.signatory(), d.verification(), d.appendix());
+        // PDFBox puts a space where a line was broken inside a word, so the comparison ignores white space
+        String text = PdfReadBack.text(renderer.render(doc)).replaceAll("\\s+", "");
+        String printed = markupLike.replace(" ", "");
+        assertThat(ends).hasSizeGreaterThan(10);
+        for (String end : ends) {
+            assertThat(text).as("text ending in %s", end).contains(printed + end);
+        }
+    }
+
     @Test
     void rendersConcurrentlyWithOneRenderer() throws Exception {
         ExecutorService pool = Executors.newFixedThreadPool(4);
