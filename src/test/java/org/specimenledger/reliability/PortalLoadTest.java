@@ -108,6 +108,7 @@ class PortalLoadTest {
             AtomicLong pdfBytes = new AtomicLong();
             List<String> errorSamples = new java.util.concurrent.CopyOnWriteArrayList<>();
             AtomicBoolean measuring = new AtomicBoolean();
+            SlowRequests slow = new SlowRequests();
             java.util.concurrent.atomic.AtomicInteger schedule = new java.util.concurrent.atomic.AtomicInteger();
             java.util.concurrent.CountDownLatch signedIn = new java.util.concurrent.CountDownLatch(USERS);
             long periodNanos = RATE <= 0 ? 0 : (long) (1e9 * USERS / RATE);
@@ -122,7 +123,7 @@ class PortalLoadTest {
                     }
                     signedIn.countDown();
                     new PortalUser(portal, organisation, numbers, period, stop, measuring, schedule,
-                            byKind, errors, pdfBytes, errorSamples).run();
+                            byKind, errors, pdfBytes, errorSamples, slow).run();
                 }, "portal-" + i));
             }
             threads.forEach(Thread::start);
@@ -149,6 +150,7 @@ class PortalLoadTest {
             long startUploads = work.uploads.get();
             long startIssues = work.issues.get();
             Duration cpuBefore = service.cpuTime();
+            slow.startWindow();
             measuring.set(true);
             Instant start = Instant.now();
             Thread.sleep(SECONDS * 1000L);
@@ -184,6 +186,7 @@ class PortalLoadTest {
                 System.out.printf(java.util.Locale.ROOT, "[reliability] load, %s: %s%n", PortalUser.KINDS.get(k),
                         percentiles(kinds.get(k)));
             }
+            System.out.printf(java.util.Locale.ROOT, "[reliability] load: %s%n", slow.summary());
             assertThat(errors.get()).as("portal errors, e.g. " + errorSamples).isZero();
             assertThat(work.serverErrors).as("upload and issue errors").isEmpty();
             assertThat(chain.valid()).as("ledger after the load").isTrue();
@@ -193,6 +196,50 @@ class PortalLoadTest {
                 assertThat(uploads).as("uploads during the measured window").isPositive();
                 assertThat(issues).as("certificate issues during the measured window").isPositive();
             }
+        }
+    }
+
+    /**
+     * The requests of the measured window that took over a second (from their scheduled send), by the second of the
+     * window they were due in: tells a few stalls of everyone (one or two seconds with many users) from slowness
+     * spread over the window.
+     */
+    static final class SlowRequests {
+        static final long SLOW_MICROS = 1_000_000;
+        private final java.util.concurrent.ConcurrentLinkedQueue<long[]> seen =
+                new java.util.concurrent.ConcurrentLinkedQueue<>();
+        private volatile long windowStart;
+
+        void startWindow() {
+            seen.clear();
+            windowStart = System.nanoTime();
+        }
+
+        void note(long scheduledNanos, long micros, int kind) {
+            if (micros > SLOW_MICROS) {
+                seen.add(new long[] {(scheduledNanos - windowStart) / 1_000_000_000L, micros, kind});
+            }
+        }
+
+        String summary() {
+            java.util.TreeMap<Long, long[]> bySecond = new java.util.TreeMap<>(); // second -> {count, max µs}
+            for (long[] s : seen) {
+                long[] c = bySecond.computeIfAbsent(s[0], k -> new long[2]);
+                c[0]++;
+                c[1] = Math.max(c[1], s[1]);
+            }
+            StringBuilder out = new StringBuilder().append(seen.size()).append(" requests over 1 s, due in ")
+                    .append(bySecond.size()).append(" distinct seconds of the window");
+            int shown = 0;
+            for (var e : bySecond.entrySet()) {
+                if (shown++ == 30) {
+                    out.append("; …");
+                    break;
+                }
+                out.append(shown == 1 ? ": " : "; ").append(String.format(java.util.Locale.ROOT, "s %d: %d (max %.1f s)",
+                        e.getKey(), e.getValue()[0], e.getValue()[1] / 1e6));
+            }
+            return out.toString();
         }
     }
 
@@ -217,7 +264,7 @@ class PortalLoadTest {
     private record PortalUser(Wire portal, String organisation, List<String> numbers, AtomicLong period,
             AtomicBoolean stop, AtomicBoolean measuring, java.util.concurrent.atomic.AtomicInteger schedule,
             List<Recorder> byKind, AtomicLong errors, AtomicLong pdfBytes,
-            List<String> samples) {
+            List<String> samples, SlowRequests slow) {
 
         static final List<String> KINDS = List.of("certificate list", "search by number", "one certificate",
                 "certificate PDF", "orders", "heats");
@@ -278,6 +325,7 @@ class PortalLoadTest {
                 long micros = (System.nanoTime() - scheduled) / 1000;
                 if (measuring.get()) {
                     byKind.get(kind).recordValue(micros);
+                    slow.note(scheduled, micros, kind);
                     if (status != 200) {
                         errors.incrementAndGet();
                     }
