@@ -215,9 +215,9 @@ class PortalLoadTest {
             windowStart = System.nanoTime();
         }
 
-        void note(long scheduledNanos, long micros, int kind) {
+        void note(long scheduledNanos, long micros) {
             if (micros > SLOW_MICROS) {
-                seen.add(new long[] {(scheduledNanos - windowStart) / 1_000_000_000L, micros, kind});
+                seen.add(new long[] {(scheduledNanos - windowStart) / 1_000_000_000L, micros});
             }
         }
 
@@ -325,7 +325,7 @@ class PortalLoadTest {
                 long micros = (System.nanoTime() - scheduled) / 1000;
                 if (measuring.get()) {
                     byKind.get(kind).recordValue(micros);
-                    slow.note(scheduled, micros, kind);
+                    slow.note(scheduled, micros);
                     if (status != 200) {
                         errors.incrementAndGet();
                     }
