@@ -209,10 +209,12 @@ class PortalLoadTest {
         private final java.util.concurrent.ConcurrentLinkedQueue<long[]> seen =
                 new java.util.concurrent.ConcurrentLinkedQueue<>();
         private volatile long windowStart;
+        private volatile Instant windowStartWall = Instant.now();
 
         void startWindow() {
             seen.clear();
             windowStart = System.nanoTime();
+            windowStartWall = Instant.now(); // printed, to line the stalls up with the database's and system's logs
         }
 
         void note(long scheduledNanos, long micros) {
@@ -229,7 +231,7 @@ class PortalLoadTest {
                 c[1] = Math.max(c[1], s[1]);
             }
             StringBuilder out = new StringBuilder().append(seen.size()).append(" requests over 1 s, due in ")
-                    .append(bySecond.size()).append(" distinct seconds of the window");
+                    .append(bySecond.size()).append(" distinct seconds of the window begun ").append(windowStartWall);
             int shown = 0;
             for (var e : bySecond.entrySet()) {
                 if (shown++ == 30) {
