@@ -24,7 +24,12 @@ import org.specimenledger.system.EmbeddedPostgresServer;
  */
 class DatabaseRestartTest {
 
-    private static final int RESTARTS = Integer.getInteger("reliability.db-restarts", HostileInputTest.FULL ? 5 : 1);
+    /**
+     * Restarts, alternately a fast stop (what an operator's restart does: the server finishes its writes and
+     * checkpoints) and a crash (an immediate shutdown, SIGQUIT to the postmaster: every server process exits at
+     * once, nothing is flushed, the next start replays the write-ahead log), first a crash.
+     */
+    private static final int RESTARTS = Integer.getInteger("reliability.db-restarts", HostileInputTest.FULL ? 6 : 2);
 
     @Test
     void theServiceRecoversFromADatabaseRestartWithoutLosingAcknowledgedWrites() throws Exception {
@@ -37,6 +42,7 @@ class DatabaseRestartTest {
         EmbeddedPostgresServer pg = EmbeddedPostgresServer.start(pgData, pgPort);
         LabWorkload work = new LabWorkload();
         List<Long> recoveries = new ArrayList<>();
+        int crashes = 0;
         AtomicLong reads = new AtomicLong();
         AtomicLong readFailures = new AtomicLong();
         List<String> readErrors = new java.util.concurrent.CopyOnWriteArrayList<>();
@@ -70,7 +76,18 @@ class DatabaseRestartTest {
             threads.forEach(Thread::start);
             for (int restart = 0; restart < RESTARTS; restart++) {
                 Thread.sleep(5000);
-                pg.close();
+                if (restart % 2 == 0) {
+                    // the moment that tells: just after the service acknowledged a write (a commit that is
+                    // acknowledged before it reaches the write-ahead log on disk would be lost here)
+                    long seen = work.acknowledgedCount();
+                    long until = System.nanoTime() + 10_000_000_000L;
+                    while (work.acknowledgedCount() == seen && System.nanoTime() < until) {
+                        Thread.onSpinWait();
+                    }
+                    crash(pgData);
+                    crashes++;
+                }
+                pg.close(); // after a crash: releases what the launcher holds
                 Thread.sleep(3000);
                 pg = EmbeddedPostgresServer.start(pgData, pgPort);
                 long back = System.nanoTime();
@@ -85,9 +102,9 @@ class DatabaseRestartTest {
             PGSimpleDataSource ds = new PGSimpleDataSource();
             ds.setUrl(url);
             List<String> broken = Invariants.check(ds, work.acknowledged);
-            System.out.printf("[reliability] database restart: %d restarts, reads answered again after %s ms, %d reads "
+            System.out.printf("[reliability] database restart: %d restarts (%d of them crashes), reads answered again after %s ms, %d reads "
                     + "(%d not 200), %d uploads and %d writes acknowledged, %d × 503 to technicians, %d broken "
-                    + "invariants%n", RESTARTS, recoveries, reads.get(), readFailures.get(), work.uploads.get(),
+                    + "invariants%n", RESTARTS, crashes, recoveries, reads.get(), readFailures.get(), work.uploads.get(),
                     work.acknowledgedCount(), work.unavailable.get(), broken.size());
             assertThat(recoveries).as("milliseconds until reads were answered again").allMatch(ms -> ms >= 0);
             assertThat(broken).as("invariants after the database restarts").isEmpty();
@@ -98,6 +115,14 @@ class DatabaseRestartTest {
             pg.close();
             deleteTree(pgData); // 40 MB of database files; the service log stays for a failed run
         }
+    }
+
+    /** Immediate shutdown of the server on {@code pgData}, as its documentation describes a crash; waits for it. */
+    private static void crash(Path pgData) throws Exception {
+        long pid = Long.parseLong(Files.readAllLines(pgData.resolve("postmaster.pid")).get(0).trim());
+        ProcessHandle postmaster = ProcessHandle.of(pid).orElseThrow();
+        new ProcessBuilder("kill", "-QUIT", Long.toString(pid)).inheritIO().start().waitFor();
+        postmaster.onExit().get(30, java.util.concurrent.TimeUnit.SECONDS);
     }
 
     private static void deleteTree(Path root) throws java.io.IOException {

@@ -44,6 +44,18 @@ class EmbeddedPostgresServerTest {
     }
 
     @Test
+    void aCommitIsAcknowledgedOnlyOnceItIsOnDisk() throws Exception {
+        try (EmbeddedPostgresServer server = EmbeddedPostgresServer.start(dir.resolve("pgdata"), 0);
+             Connection c = DriverManager.getConnection(server.jdbcUrl()); var s = c.createStatement()) {
+            for (String durable : new String[] {"synchronous_commit", "fsync", "full_page_writes"}) {
+                var rs = s.executeQuery("SHOW " + durable);
+                rs.next();
+                assertThat(rs.getString(1)).as(durable).isEqualTo("on");
+            }
+        }
+    }
+
+    @Test
     void aServerLeftByAKilledRunIsStoppedAndStartedAgain() throws Exception {
         Path data = dir.resolve("pgdata");
         // A child JVM starts the server and is then killed with SIGKILL, as a crash would: its postmaster
