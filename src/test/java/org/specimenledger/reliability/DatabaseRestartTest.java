@@ -102,7 +102,7 @@ class DatabaseRestartTest {
             PGSimpleDataSource ds = new PGSimpleDataSource();
             ds.setUrl(url);
             List<String> broken = Invariants.check(ds, work.acknowledged);
-            System.out.printf("[reliability] database restart: %d restarts (%d of them crashes), reads answered again after %s ms, %d reads "
+            System.out.printf("[reliability] database restart: %d restarts (crashes: %d), reads answered again after %s ms, %d reads "
                     + "(%d not 200), %d uploads and %d writes acknowledged, %d × 503 to technicians, %d broken "
                     + "invariants%n", RESTARTS, crashes, recoveries, reads.get(), readFailures.get(), work.uploads.get(),
                     work.acknowledgedCount(), work.unavailable.get(), broken.size());
