@@ -2,7 +2,6 @@ package org.specimenledger.certificates;
 
 import java.math.BigDecimal;
 import java.time.LocalDate;
-import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -11,6 +10,7 @@ import java.util.Map;
 import java.util.UUID;
 import org.specimenledger.specimens.SpecimenFixtures;
 import org.specimenledger.testsupport.Api;
+import org.specimenledger.testsupport.TestRunBodies;
 
 /**
  * An invented bench for the certificate tests, registered through the real API: one heat (20 mm bar), an order
@@ -149,20 +149,7 @@ public final class CertificateBench {
     }
 
     private Map<String, Object> registration(String specimenId) {
-        Map<String, Object> m = new HashMap<>();
-        m.put("specimenId", specimenId);
-        m.put("machineId", machine);
-        m.put("forceTransducerId", transducer);
-        m.put("forceRangeN", 100000);
-        m.put("extensometerId", extensometer);
-        m.put("testedAt", OffsetDateTime.of(TODAY.minusDays(1).atTime(10, 0), ZoneOffset.ofHours(1)).toString());
-        m.put("temperatureC", new BigDecimal("21.5"));
-        m.put("standard", "ISO_6892_1");
-        m.put("method", "A1");
-        m.put("standardReference", "ISO 6892-1:2019");
-        m.put("nominalStrainRatePerS", new BigDecimal("0.00025"));
-        m.put("mode", "TENSILE");
-        return m;
+        return TestRunBodies.registration(specimenId, machine, transducer, extensometer);
     }
 
     private void calibrate(String instrument, Map<String, Object> classes) {

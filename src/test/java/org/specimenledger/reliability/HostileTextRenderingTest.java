@@ -24,6 +24,7 @@ import org.specimenledger.testing.SyntheticCurves;
 import org.specimenledger.testsupport.Api;
 import org.specimenledger.testsupport.IntegrationTest;
 import org.specimenledger.testsupport.TestAccounts;
+import org.specimenledger.testsupport.TestRunBodies;
 import org.verapdf.pdfa.flavours.PDFAFlavour;
 
 /**
@@ -198,19 +199,7 @@ class HostileTextRenderingTest extends IntegrationTest {
         String extensometer = created(m.post("/api/v1/equipment", Map.of("assetId", "EX-" + run, "kind",
                 "EXTENSOMETER", "description", "Clip-on extensometer", "gaugeLengthMm", 50)));
         calibrate(m, extensometer, "CAL-EX-" + run, Map.of("accuracyClass", "1"));
-        Map<String, Object> registration = new HashMap<>();
-        registration.put("specimenId", specimenId);
-        registration.put("machineId", machine);
-        registration.put("forceTransducerId", transducer);
-        registration.put("forceRangeN", 100000);
-        registration.put("extensometerId", extensometer);
-        registration.put("testedAt", TODAY.minusDays(1).atTime(10, 0).atOffset(ZoneOffset.ofHours(1)).toString());
-        registration.put("temperatureC", new BigDecimal("21.5"));
-        registration.put("standard", "ISO_6892_1");
-        registration.put("method", "A1");
-        registration.put("standardReference", "ISO 6892-1:2019");
-        registration.put("nominalStrainRatePerS", new BigDecimal("0.00025"));
-        registration.put("mode", "TENSILE");
+        Map<String, Object> registration = TestRunBodies.registration(specimenId, machine, transducer, extensometer);
         String testRun = created(tech.post("/api/v1/tests", registration));
         // the mark is not put into the file: a CR LF in it would end the metadata line
         byte[] curve = SyntheticCurves.labelled("run: " + run, SyntheticCurves.rambergOsgood(200_000, 300, 10, s0,

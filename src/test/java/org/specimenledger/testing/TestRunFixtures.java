@@ -1,6 +1,5 @@
 package org.specimenledger.testing;
 
-import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
@@ -10,6 +9,7 @@ import java.util.Map;
 import java.util.UUID;
 import org.specimenledger.specimens.SpecimenFixtures;
 import org.specimenledger.testsupport.Api;
+import org.specimenledger.testsupport.TestRunBodies;
 
 /**
  * An invented laboratory bench for the test-run tests: a specimen on a new heat and order, a testing machine
@@ -47,25 +47,14 @@ final class TestRunFixtures {
 
     /** A registration body for the bench: 100 kN range, ISO 6892-1 method A1, 21.5 °C, yesterday at 10:00 +01:00. */
     static Map<String, Object> registration(Bench b) {
-        Map<String, Object> m = new HashMap<>();
-        m.put("specimenId", b.specimenId());
-        m.put("machineId", b.machineId());
-        m.put("forceTransducerId", b.transducerId());
-        m.put("forceRangeN", 100000);
-        m.put("extensometerId", b.extensometerId());
-        m.put("testedAt", testedAt().toString());
-        m.put("temperatureC", new BigDecimal("21.5"));
-        m.put("standard", "ISO_6892_1");
-        m.put("method", "A1");
-        m.put("standardReference", "ISO 6892-1:2019");
-        m.put("nominalStrainRatePerS", new BigDecimal("0.00025"));
-        m.put("mode", "TENSILE");
+        Map<String, Object> m = TestRunBodies.registration(b.specimenId(), b.machineId(), b.transducerId(),
+                b.extensometerId());
         m.put("remarks", "grips checked before the run");
         return m;
     }
 
     static OffsetDateTime testedAt() {
-        return TODAY.minusDays(1).atTime(10, 0).atOffset(ZoneOffset.ofHours(1));
+        return TestRunBodies.testedAt();
     }
 
     static Map<String, Object> with(Map<String, Object> body, String key, Object value) {
